@@ -1,0 +1,14 @@
+#!/usr/bin/env bash
+# Sets brume up from nothing: installs the Debian packages it needs, configures and builds.
+#   scripts/build.sh [PRESET]     PRESET: release (default), debug, asan, ci — see CMakePresets.json
+# The binary ends up in build/PRESET/bin/brume.
+set -euo pipefail
+here=$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)
+preset=${1:-release}
+
+bash "$here/scripts/install-deps.sh"
+cd "$here"
+cmake --preset "$preset" >/dev/null
+jobs=$(nproc 2>/dev/null || echo 2)
+echo "brume: building the '$preset' preset with $jobs jobs (build/$preset)"
+cmake --build --preset "$preset" -j "$jobs"

@@ -1,0 +1,16 @@
+#!/usr/bin/env bash
+# Sets brume up (dependencies, configure, build) and runs the main job on every core of this machine:
+# the demo turbulence box of problems/, writing into a new run folder under runs/.
+#   scripts/run-demo.sh [extra brume run options, e.g. --set clock.stop_time=2Myr]
+set -euo pipefail
+here=$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)
+config="$here/problems/demo.yaml"
+
+bash "$here/scripts/build.sh" release
+export OMPI_ALLOW_RUN_AS_ROOT=1 OMPI_ALLOW_RUN_AS_ROOT_CONFIRM=1
+export OMPI_MCA_pml=ob1 OMPI_MCA_btl=self,vader
+ranks=$(nproc 2>/dev/null || echo 1)
+out="$here/runs/demo-$(date +%Y%m%d-%H%M%S)"
+echo "brume: running $config on $ranks cores into $out"
+mpiexec -n "$ranks" "$here/build/release/bin/brume" run "$config" --out "$out" "$@"
+echo "brume: outputs are in $out"
