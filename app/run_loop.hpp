@@ -1,0 +1,37 @@
+// The run loop: advances the state from its time to the stop time (or a step or wall-time limit),
+// reports progress, and stops on a numerical failure.
+#pragma once
+
+#include "io/log.hpp"
+#include "solver/integrator.hpp"
+#include "solver/state.hpp"
+
+namespace brume::app {
+
+struct RunLimits {
+  double stop_time = 0.0;        // code units
+  long long max_steps = 0;       // 0: no limit
+  double wall_budget = 0.0;      // seconds; 0: no limit
+  double progress_interval = 5;  // wall seconds between progress lines
+  double time_unit = 1.0;        // code time unit in the unit progress lines show (Myr)
+  const char* time_unit_name = "Myr";
+};
+
+enum class RunEnd { stop_time, step_limit, wall_budget, numerical_failure, time_step_collapse };
+
+struct RunSummary {
+  RunEnd end = RunEnd::stop_time;
+  long long steps = 0;
+  double wall_seconds = 0.0;
+  long long cell_updates = 0;
+  long long density_floors = 0;
+  long long pressure_floors = 0;
+  long long fallback_cells = 0;
+  solver::NumericalFailure failure;
+  double last_dt = 0.0;  // the offending time step when the step collapsed
+};
+
+[[nodiscard]] RunSummary run_loop(solver::Integrator& integrator, solver::State& state,
+                                  const RunLimits& limits, const io::Log& log);
+
+}  // namespace brume::app

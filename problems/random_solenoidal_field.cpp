@@ -1,0 +1,88 @@
+#include "problems/random_solenoidal_field.hpp"
+
+#include <cmath>
+#include <numbers>
+#include <random>
+
+namespace brume::problems {
+
+namespace {
+
+// A uniform deviate in (0, 1) from the generator's raw 53 bits: fully specified by the standard, so
+// the same seed gives the same field with any standard library.
+double uniform(std::mt19937_64& generator) {
+  return (static_cast<double>(generator() >> 11) + 0.5) * 0x1.0p-53;
+}
+
+// Box–Muller transform (Box & Muller 1958, Ann. Math. Statist. 29, 610).
+double gaussian(std::mt19937_64& generator) {
+  const double u1 = uniform(generator);
+  const double u2 = uniform(generator);
+  return std::sqrt(-2.0 * std::log(u1)) * std::cos(2.0 * std::numbers::pi * u2);
+}
+
+// One of each ±k pair: the first non-zero component is positive.
+bool upper_half(const std::array<int, 3>& k) {
+  if (k[0] != 0) return k[0] > 0;
+  if (k[1] != 0) return k[1] > 0;
+  return k[2] > 0;
+}
+
+}  // namespace
+
+RandomSolenoidalField::RandomSolenoidalField(std::array<double, 3> box_size,
+                                             std::array<bool, 3> active, int lowest, int highest,
+                                             double rms, std::uint64_t seed)
+    : box_size_(box_size) {
+  std::mt19937_64 generator(seed);
+  std::array<int, 3> reach{};
+  for (int d = 0; d < 3; ++d)
+    reach[d] = active[d] ? highest : 0;
+  double mean_square = 0.0;
+  for (int kx = -reach[0]; kx <= reach[0]; ++kx) {
+    for (int ky = -reach[1]; ky <= reach[1]; ++ky) {
+      for (int kz = -reach[2]; kz <= reach[2]; ++kz) {
+        const std::array<int, 3> k{kx, ky, kz};
+        const int k2 = kx * kx + ky * ky + kz * kz;
+        if (k2 < lowest * lowest || k2 > highest * highest || !upper_half(k)) continue;
+        // Wave vector in physical units, for the projection perpendicular to it.
+        std::array<double, 3> kv{};
+        double kv2 = 0.0;
+        for (int d = 0; d < 3; ++d) {
+          kv[d] = k[d] / box_size[d];
+          kv2 += kv[d] * kv[d];
+        }
+        std::array<double, 3> a{gaussian(generator), gaussian(generator), gaussian(generator)};
+        const double along = (a[0] * kv[0] + a[1] * kv[1] + a[2] * kv[2]) / kv2;
+        for (int d = 0; d < 3; ++d)
+          a[d] -= along * kv[d];
+        const double phase = 2.0 * std::numbers::pi * uniform(generator);
+        modes_.push_back({k, a, phase});
+        // ⟨sin²⟩ = 1/2 over the box for every mode, and distinct modes are orthogonal.
+        mean_square += 0.5 * (a[0] * a[0] + a[1] * a[1] + a[2] * a[2]);
+      }
+    }
+  }
+  const double scale = mean_square > 0.0 ? rms / std::sqrt(mean_square) : 0.0;
+  for (auto& mode : modes_) {
+    for (double& component : mode.amplitude)
+      component *= scale;
+  }
+}
+
+std::array<double, 3> RandomSolenoidalField::operator()(double x, double y, double z) const {
+  std::array<double, 3> v{0.0, 0.0, 0.0};
+  for (const auto& mode : modes_) {
+    const double argument =
+        2.0 * std::numbers::pi *
+            (mode.wave_number[0] * x / box_size_[0] + mode.wave_number[1] * y / box_size_[1] +
+             mode.wave_number[2] * z / box_size_[2]) +
+        mode.phase;
+    const double s = std::sin(argument);
+    for (int d = 0; d < 3; ++d)
+      v[d] += mode.amplitude[d] * s;
+  }
+  return v;
+}
+
+}  // namespace brume::problems

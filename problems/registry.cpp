@@ -1,0 +1,40 @@
+#include <stdexcept>
+
+#include "problems/decaying_turbulence.hpp"
+#include "problems/problem.hpp"
+
+namespace brume::problems {
+
+const std::vector<Problem>& all_problems() {
+  static const std::vector<Problem> list = {
+      decaying_turbulence_problem(),
+  };
+  return list;
+}
+
+const Problem& find_problem(const std::string& name) {
+  for (const auto& problem : all_problems()) {
+    if (problem.name == name) return problem;
+  }
+  throw std::logic_error("no problem named '" + name + "' is registered");
+}
+
+std::vector<config::Section> problem_sections() {
+  std::vector<config::Section> sections;
+  for (const auto& problem : all_problems()) {
+    config::Section section = problem.section();
+    section.path = "problem." + problem.name;
+    section.only_when = config::Activation{"problem.name", problem.name};
+    sections.push_back(std::move(section));
+  }
+  return sections;
+}
+
+std::vector<config::Choice> problem_choices() {
+  std::vector<config::Choice> choices;
+  for (const auto& problem : all_problems())
+    choices.push_back({problem.name, problem.summary});
+  return choices;
+}
+
+}  // namespace brume::problems
