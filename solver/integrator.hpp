@@ -1,0 +1,51 @@
+// Public entry point of the ideal-MHD / hydrodynamics step for the run loop.
+#pragma once
+
+#include <memory>
+
+#include "solver/block_geometry.hpp"
+#include "solver/ghost_filler.hpp"
+#include "solver/state.hpp"
+#include "solver/step_report.hpp"
+
+namespace brume::solver {
+
+enum class Reconstruction { donor_cell, plm, ppm };
+enum class SlopeLimiter { monotonized_central, van_leer };
+enum class RiemannSolver { llf, hlle, hllc, hlld };
+enum class GasModel { ideal_gas, isothermal };
+
+struct SchemeOptions {
+  Reconstruction reconstruction = Reconstruction::plm;
+  SlopeLimiter limiter = SlopeLimiter::monotonized_central;
+  bool characteristic = false;  // characteristic limiting: not available yet (rejected)
+  RiemannSolver riemann = RiemannSolver::hlle;
+  GasModel eos = GasModel::ideal_gas;
+  double gamma = 5.0 / 3.0;  // ideal gas
+  double sound_speed = 1.0;  // isothermal gas
+  bool magnetic = true;
+  double courant = 0.4;  // of the summed-direction CFL limit (time_step.hpp)
+  double density_floor = 1e-10;
+  double pressure_floor = 1e-14;
+};
+
+class Integrator {
+ public:
+  virtual ~Integrator() = default;
+  // Largest stable step of this block (the run loop takes the minimum over blocks).
+  [[nodiscard]] virtual double stable_time_step(const State& state) const = 0;
+  // One predictor–corrector step of length dt; fills ghosts itself (two ghost fills per step).
+  // On a numerical failure the state is left as the failed stage made it.
+  virtual StepReport advance(State& state, double dt) = 0;
+};
+
+// Ghost layers the options need (the geometry of the states must have at least these).
+[[nodiscard]] int required_ghost_layers(const SchemeOptions& options);
+
+// Throws std::invalid_argument for impossible combinations (HLLC with MHD, HLLD for
+// hydrodynamics, characteristic limiting, too few ghost layers, non-positive parameters).
+[[nodiscard]] std::unique_ptr<Integrator> make_integrator(
+    const SchemeOptions& options, const BlockGeometry& geometry,
+    std::shared_ptr<const GhostFiller> ghosts);
+
+}  // namespace brume::solver

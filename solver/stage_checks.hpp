@@ -1,0 +1,140 @@
+// Robustness after each stage: detection of cells that lost positivity (for the first-order
+// fallback), non-finite values (reported, never thrown), and counted density/pressure floors.
+#pragma once
+
+#include <algorithm>
+#include <cmath>
+#include <cstddef>
+#include <vector>
+
+#include "solver/face_flux.hpp"
+#include "solver/primitive.hpp"
+#include "solver/riemann/llf.hpp"
+#include "solver/step_report.hpp"
+
+namespace brume::solver {
+
+// B² of cell c from its face averages (zero for hydrodynamics).
+template <bool Magnetic>
+[[nodiscard]] inline double cell_field_sq(const State& s, std::ptrdiff_t c) {
+  if constexpr (Magnetic) {
+    const double bx = cell_field(s, 0, c), by = cell_field(s, 1, c), bz = cell_field(s, 2, c);
+    return bx * bx + by * by + bz * bz;
+  } else {
+    (void)s, (void)c;
+    return 0.0;
+  }
+}
+
+template <class Eos, bool Magnetic>
+[[nodiscard]] inline double cell_pressure(const State& s, std::ptrdiff_t c, const Eos& eos) {
+  const double e = Eos::isothermal ? 0.0 : s.energy[c];
+  return pressure_from_conserved(s.density[c], s.momentum[0][c], s.momentum[1][c], s.momentum[2][c],
+                                 e, cell_field_sq<Magnetic>(s, c), eos);
+}
+
+// Interior cells with density or pressure that is not positive (NaN included), ascending.
+template <class Eos, bool Magnetic>
+void find_unphysical_cells(const State& s, const Eos& eos, std::vector<std::ptrdiff_t>& cells) {
+  const BlockGeometry& g = s.geometry;
+  cells.clear();
+  for (int k = 0; k < g.cells[2]; ++k) {
+    for (int j = 0; j < g.cells[1]; ++j) {
+      const std::ptrdiff_t row = g.index(0, j, k);
+      bool any = false;
+      for (int i = 0; i < g.cells[0]; ++i) {
+        const std::ptrdiff_t c = row + i;
+        any |= !(s.density[c] > 0.0) || !(cell_pressure<Eos, Magnetic>(s, c, eos) > 0.0);
+      }
+      if (!any) continue;
+      for (int i = 0; i < g.cells[0]; ++i) {
+        const std::ptrdiff_t c = row + i;
+        if (!(s.density[c] > 0.0) || !(cell_pressure<Eos, Magnetic>(s, c, eos) > 0.0)) {
+          cells.push_back(c);
+        }
+      }
+    }
+  }
+}
+
+[[nodiscard]] inline bool is_interior(const BlockGeometry& g, std::ptrdiff_t c) {
+  std::ptrdiff_t rest = c;
+  for (int d = 0; d < 3; ++d) {
+    const std::ptrdiff_t e = g.extent(d);
+    const std::ptrdiff_t p = rest % e - g.ghosts(d);
+    rest /= e;
+    if (p < 0 || p >= g.cells[d]) return false;
+  }
+  return true;
+}
+
+// Replaces the fluxes through every face of the listed cells by first-order fluxes (donor cell and
+// local Lax–Friedrichs), correcting both cells of each face so the update stays conservative;
+// each face shared by two listed cells is replaced once. The field (CT) update is kept.
+// The positivity fallback is common practice, no source (DESIGN.md §3).
+template <class Eos, bool Magnetic, class Recon, class Solver>
+void first_order_fallback(const std::vector<std::ptrdiff_t>& cells, double dt, const Eos& eos,
+                          const PrimitiveArrays& w, const State& source, State& target) {
+  const BlockGeometry& g = source.geometry;
+  for (int d = 0; d < 3; ++d) {
+    if (!g.active(d)) continue;
+    const FaceReaders readers = face_readers(w, source, d);
+    const std::ptrdiff_t s = readers.step;
+    const double dt_dx = dt / g.spacing[d];
+    const int t1 = tangent1(d), t2 = tangent2(d);
+    for (const std::ptrdiff_t c : cells) {
+      for (int side = 0; side < 2; ++side) {
+        const std::ptrdiff_t face = side == 0 ? c : c + s;
+        if (side == 0 && std::binary_search(cells.begin(), cells.end(), c - s)) continue;
+        const FaceFlux high = face_flux<Eos, Magnetic, Recon, Solver>(readers, face, eos);
+        const FaceFlux low = face_flux<Eos, Magnetic, DonorCell, Llf>(readers, face, eos);
+        const double delta[5] = {low.density - high.density, low.mn - high.mn, low.mt1 - high.mt1,
+                                 low.mt2 - high.mt2, low.energy - high.energy};
+        // The cell below the face loses dt/dx ΔF, the cell above gains it.
+        const std::ptrdiff_t below = face - s, above = face;
+        for (const auto& [cell, sign] : {std::pair{below, -1.0}, std::pair{above, 1.0}}) {
+          if (!is_interior(g, cell)) continue;
+          const double f = sign * dt_dx;
+          target.density[cell] += f * delta[0];
+          target.momentum[d][cell] += f * delta[1];
+          target.momentum[t1][cell] += f * delta[2];
+          target.momentum[t2][cell] += f * delta[3];
+          if constexpr (!Eos::isothermal) target.energy[cell] += f * delta[4];
+        }
+      }
+    }
+  }
+}
+
+// The first interior cell with a non-finite conserved value, if any.
+[[nodiscard]] NumericalFailure find_non_finite(const State& s);
+
+// Density floor (momentum kept) and pressure floor (thermal energy raised to p_floor); returns the
+// counts in `density_floors`, `pressure_floors`. Common practice, no source.
+template <class Eos, bool Magnetic>
+void apply_floors(State& s, double density_floor, double pressure_floor, const Eos& eos,
+                  long& density_floors, long& pressure_floors) {
+  const BlockGeometry& g = s.geometry;
+  for (int k = 0; k < g.cells[2]; ++k) {
+    for (int j = 0; j < g.cells[1]; ++j) {
+      const std::ptrdiff_t row = g.index(0, j, k);
+      long nd = 0, np = 0;
+      for (int i = 0; i < g.cells[0]; ++i) {
+        const std::ptrdiff_t c = row + i;
+        const bool low_density = s.density[c] < density_floor;
+        nd += long(low_density);
+        s.density[c] = low_density ? density_floor : s.density[c];
+        if constexpr (!Eos::isothermal) {
+          const double p = cell_pressure<Eos, Magnetic>(s, c, eos);
+          const bool low_pressure = p < pressure_floor;
+          np += long(low_pressure);
+          s.energy[c] += low_pressure ? (pressure_floor - p) / (eos.gamma - 1.0) : 0.0;
+        }
+      }
+      density_floors += nd;
+      pressure_floors += np;
+    }
+  }
+}
+
+}  // namespace brume::solver
