@@ -15,6 +15,8 @@ const std::vector<SubcommandInfo>& subcommands() {
       {"keys", "[SECTION] [--markdown]",
        "list every configuration key: type, unit, default, range"},
       {"problems", "", "list the initial conditions brume can set up"},
+      {"bench", "[--json] [--cells N] [--steps N]",
+       "measure cell-updates per second per core and bytes per cell of the main schemes"},
   };
   return list;
 }
@@ -35,7 +37,10 @@ std::string option_value(const std::vector<std::string>& words, std::size_t& i,
   }
   if (i + 1 >= words.size()) {
     throw UserError("command line: " + option + " needs a value (" +
-                    (option == "--set" ? "--set SECTION.KEY=VALUE" : option + " DIR") + ")");
+                    (option == "--set"   ? "--set SECTION.KEY=VALUE"
+                     : option == "--out" ? option + " DIR"
+                                         : option + " N") +
+                    ")");
   }
   return words[++i];
 }
@@ -78,6 +83,12 @@ CommandLine parse_command_line(const std::vector<std::string>& words) {
       line.overrides.push_back(option_value(words, i, "--set"));
     } else if (starts_with_option(word, "--out")) {
       line.out = option_value(words, i, "--out");
+    } else if (word == "--json") {
+      line.json = true;
+    } else if (starts_with_option(word, "--cells")) {
+      line.cells = option_value(words, i, "--cells");
+    } else if (starts_with_option(word, "--steps")) {
+      line.steps = option_value(words, i, "--steps");
     } else if (word.size() > 1 && word[0] == '-') {
       throw UserError("command line: unknown option '" + word + "' (see brume --help)");
     } else if (line.command.empty()) {

@@ -16,7 +16,10 @@ struct CommandLine {
   std::optional<std::string> out;       // --out DIR
   bool help = false;
   bool version = false;
-  bool markdown = false;  // --markdown (keys)
+  bool markdown = false;             // --markdown (keys)
+  bool json = false;                 // --json (bench)
+  std::optional<std::string> cells;  // --cells N (bench)
+  std::optional<std::string> steps;  // --steps N (bench)
   io::Verbosity verbosity = io::Verbosity::normal;
 };
 

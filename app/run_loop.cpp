@@ -5,37 +5,45 @@
 #include <cmath>
 
 #include "io/progress.hpp"
+#include "solver/global_reductions.hpp"
 
 namespace brume::app {
 
 RunSummary run_loop(solver::Integrator& integrator, solver::State& state, const RunLimits& limits,
-                    const io::Log& log) {
+                    const io::Log& log, const solver::Decomposition& decomposition) {
   using Clock = std::chrono::steady_clock;
   const auto start = Clock::now();
+  const MPI_Comm comm = decomposition.comm();
+  const auto& box_cells = decomposition.box_cells();
   io::Progress progress(log, limits.progress_interval, limits.time_unit_name);
-  const long long cells = state.geometry.interior_cells();
+  const long long cells = (long long)box_cells[0] * box_cells[1] * box_cells[2];
   RunSummary summary;
   io::ProgressSample sample;
   sample.cells = cells;
   sample.stop_time = limits.stop_time / limits.time_unit;
   auto wall = [&] { return std::chrono::duration<double>(Clock::now() - start).count(); };
+  // Every rank holds the same time and step count (the time step is agreed), so the loop
+  // condition and the step limit agree by themselves.
   while (state.time < limits.stop_time) {
     if (limits.max_steps > 0 && summary.steps >= limits.max_steps) {
       summary.end = RunEnd::step_limit;
       break;
     }
-    if (limits.wall_budget > 0.0 && wall() >= limits.wall_budget) {
+    const solver::StepAgreement agreed =
+        solver::agree_on_step(integrator.stable_time_step(state), wall(), comm);
+    if (limits.wall_budget > 0.0 && agreed.wall_seconds >= limits.wall_budget) {
       summary.end = RunEnd::wall_budget;
       break;
     }
     // The last step lands on the stop time exactly.
-    const double dt = std::min(integrator.stable_time_step(state), limits.stop_time - state.time);
+    const double dt = std::min(agreed.time_step, limits.stop_time - state.time);
     if (!(dt > 0.0) || !std::isfinite(dt)) {
       summary.end = RunEnd::time_step_collapse;
       summary.last_dt = dt;
       break;
     }
-    const solver::StepReport report = integrator.advance(state, dt);
+    const solver::StepReport report =
+        solver::combine_step_reports(integrator.advance(state, dt), box_cells, comm);
     summary.density_floors += report.density_floors;
     summary.pressure_floors += report.pressure_floors;
     summary.fallback_cells += report.fallback_cells;
@@ -51,7 +59,8 @@ RunSummary run_loop(solver::Integrator& integrator, solver::State& state, const 
     sample.dt = dt / limits.time_unit;
     progress.update(sample, state.time >= limits.stop_time);
   }
-  summary.wall_seconds = wall();
+  // The slowest rank's wall time is the run's.
+  summary.wall_seconds = solver::agree_on_step(0.0, wall(), comm).wall_seconds;
   return summary;
 }
 

@@ -1,8 +1,11 @@
 // The run loop: advances the state from its time to the stop time (or a step or wall-time limit),
-// reports progress, and stops on a numerical failure.
+// reports progress, and stops on a numerical failure. On many ranks every rank runs it on its own
+// block; the time step, the stop decisions and the step reports are agreed over all ranks, so that
+// every rank takes the same steps and the summary is the same everywhere.
 #pragma once
 
 #include "io/log.hpp"
+#include "solver/decomposition.hpp"
 #include "solver/integrator.hpp"
 #include "solver/state.hpp"
 
@@ -23,7 +26,7 @@ struct RunSummary {
   RunEnd end = RunEnd::stop_time;
   long long steps = 0;
   double wall_seconds = 0.0;
-  long long cell_updates = 0;
+  long long cell_updates = 0;  // over the whole box
   long long density_floors = 0;
   long long pressure_floors = 0;
   long long fallback_cells = 0;
@@ -31,7 +34,9 @@ struct RunSummary {
   double last_dt = 0.0;  // the offending time step when the step collapsed
 };
 
+// Collective over the decomposition's communicator; `state` is this rank's block.
 [[nodiscard]] RunSummary run_loop(solver::Integrator& integrator, solver::State& state,
-                                  const RunLimits& limits, const io::Log& log);
+                                  const RunLimits& limits, const io::Log& log,
+                                  const solver::Decomposition& decomposition);
 
 }  // namespace brume::app

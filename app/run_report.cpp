@@ -4,24 +4,33 @@
 #include <cstdio>
 
 #include "io/progress.hpp"
+#include "solver/exact_sum.hpp"
 
 namespace brume::app {
 
-RunTotals totals(const solver::State& state) {
+RunTotals totals(const solver::State& state, MPI_Comm comm) {
   const auto& g = state.geometry;
   const double volume = g.spacing[0] * g.spacing[1] * g.spacing[2];
-  RunTotals t;
+  // mass, three momenta, energy
+  std::array<solver::ExactSum, 5> sums;
   for (int k = 0; k < g.cells[2]; ++k) {
     for (int j = 0; j < g.cells[1]; ++j) {
       for (int i = 0; i < g.cells[0]; ++i) {
         const auto c = g.index(i, j, k);
-        t.mass += state.density[c] * volume;
+        sums[0].add(state.density[c] * volume);
         for (int d = 0; d < 3; ++d)
-          t.momentum[d] += state.momentum[d][c] * volume;
-        if (!state.isothermal) t.energy += state.energy[c] * volume;
+          sums[std::size_t(d) + 1].add(state.momentum[d][c] * volume);
+        if (!state.isothermal) sums[4].add(state.energy[c] * volume);
       }
     }
   }
+  for (auto& sum : sums)
+    sum.combine(comm);
+  RunTotals t;
+  t.mass = sums[0].value();
+  for (int d = 0; d < 3; ++d)
+    t.momentum[d] = sums[std::size_t(d) + 1].value();
+  t.energy = sums[4].value();
   return t;
 }
 

@@ -2,6 +2,8 @@
 // how well mass, momentum and energy were kept.
 #pragma once
 
+#include <mpi.h>
+
 #include <array>
 #include <string>
 
@@ -10,14 +12,16 @@
 
 namespace brume::app {
 
-// Volume integrals over the interior cells (code units).
+// Volume integrals over the interior cells of the whole box (code units).
 struct RunTotals {
   double mass = 0.0;
   std::array<double, 3> momentum{};
   double energy = 0.0;  // total energy; 0 when isothermal
 };
 
-[[nodiscard]] RunTotals totals(const solver::State& state);
+// Collective over `comm` (one block per rank): every cell's contribution is summed exactly and
+// rounded once, so the totals do not depend on the number of ranks; the same on every rank.
+[[nodiscard]] RunTotals totals(const solver::State& state, MPI_Comm comm);
 
 [[nodiscard]] std::string run_report(const RunSummary& summary, const RunTotals& before,
                                      const RunTotals& after, const solver::State& state,

@@ -1,13 +1,23 @@
 #include <stdexcept>
 
+#include "problems/blast_wave.hpp"
 #include "problems/decaying_turbulence.hpp"
+#include "problems/field_loop.hpp"
+#include "problems/kelvin_helmholtz.hpp"
+#include "problems/linear_wave.hpp"
+#include "problems/orszag_tang.hpp"
+#include "problems/polarized_alfven_wave.hpp"
 #include "problems/problem.hpp"
+#include "problems/shock_tube.hpp"
 
 namespace brume::problems {
 
 const std::vector<Problem>& all_problems() {
   static const std::vector<Problem> list = {
-      decaying_turbulence_problem(),
+      decaying_turbulence_problem(), field_loop_problem(),
+      orszag_tang_problem(),         blast_wave_problem(),
+      kelvin_helmholtz_problem(),    shock_tube_problem(),
+      linear_wave_problem(),         polarized_alfven_wave_problem(),
   };
   return list;
 }

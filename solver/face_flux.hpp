@@ -26,11 +26,11 @@ struct FaceReaders {
   const BlockGeometry& g = source.geometry;
   const int t1 = tangent1(d), t2 = tangent2(d);
   FaceReaders r{};
-  r.density = {w.density.data()};
+  r.density = {source.density.data()};  // ρ is both conserved and primitive
   r.vn = {w.velocity[d].data()};
   r.vt1 = {w.velocity[t1].data()};
   r.vt2 = {w.velocity[t2].data()};
-  r.pressure = {w.pressure.empty() ? w.density.data() : w.pressure.data()};
+  r.pressure = {w.pressure.empty() ? source.density.data() : w.pressure.data()};
   if (source.magnetic) {
     r.bt1 = {source.face_field[t1].data(), g.step(t1)};
     r.bt2 = {source.face_field[t2].data(), g.step(t2)};
@@ -49,20 +49,20 @@ template <class Eos, bool Magnetic, class Recon, class Solver>
 [[nodiscard]] inline FaceFlux face_flux(const FaceReaders& r, std::ptrdiff_t c, const Eos& eos) {
   const std::ptrdiff_t s = r.step;
   FaceState left{}, right{};
-  Recon::face(r.density, c, s, left.density, right.density);
-  Recon::face(r.vn, c, s, left.vn, right.vn);
-  Recon::face(r.vt1, c, s, left.vt1, right.vt1);
-  Recon::face(r.vt2, c, s, left.vt2, right.vt2);
+  face_states<Recon>(r.density, c, s, left.density, right.density);
+  face_states<Recon>(r.vn, c, s, left.vn, right.vn);
+  face_states<Recon>(r.vt1, c, s, left.vt1, right.vt1);
+  face_states<Recon>(r.vt2, c, s, left.vt2, right.vt2);
   if constexpr (Eos::isothermal) {
     left.pressure = eos.sound_speed_sq(left.density, 0.0) * left.density;
     right.pressure = eos.sound_speed_sq(right.density, 0.0) * right.density;
   } else {
-    Recon::face(r.pressure, c, s, left.pressure, right.pressure);
+    face_states<Recon>(r.pressure, c, s, left.pressure, right.pressure);
   }
   double bn = 0.0;
   if constexpr (Magnetic) {
-    Recon::face(r.bt1, c, s, left.bt1, right.bt1);
-    Recon::face(r.bt2, c, s, left.bt2, right.bt2);
+    face_states<Recon>(r.bt1, c, s, left.bt1, right.bt1);
+    face_states<Recon>(r.bt2, c, s, left.bt2, right.bt2);
     bn = r.bn[c];
   }
   return Solver::template flux<Eos, Magnetic>(left, right, bn, eos);

@@ -1,6 +1,7 @@
 // Public entry point of the ideal-MHD / hydrodynamics step for the run loop.
 #pragma once
 
+#include <cstddef>
 #include <memory>
 
 #include "solver/block_geometry.hpp"
@@ -37,6 +38,8 @@ class Integrator {
   // One predictor–corrector step of length dt; fills ghosts itself (two ghost fills per step).
   // On a numerical failure the state is left as the failed stage made it.
   virtual StepReport advance(State& state, double dt) = 0;
+  // Bytes of the arrays the integrator owns (half-step state and scratch), for `brume bench`.
+  [[nodiscard]] virtual std::size_t allocated_bytes() const { return 0; }
 };
 
 // Ghost layers the options need (the geometry of the states must have at least these).

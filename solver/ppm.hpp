@@ -31,24 +31,17 @@ struct Ppm {
     ar = new_ar;
   }
 
+  // The monotonized parabola of cell c: its lower and upper edge values.
   template <class Q>
-  static void face(const Q& q, std::ptrdiff_t c, std::ptrdiff_t s, double& l, double& r) {
-    const double qm3 = q(c - 3 * s), qm2 = q(c - 2 * s), qm1 = q(c - s), q0 = q(c), qp1 = q(c + s),
-                 qp2 = q(c + 2 * s);
+  static void edges(const Q& q, std::ptrdiff_t c, std::ptrdiff_t s, double& lo, double& hi) {
+    const double qm2 = q(c - 2 * s), qm1 = q(c - s), q0 = q(c), qp1 = q(c + s), qp2 = q(c + 2 * s);
     // Limited slopes (Colella & Woodward 1984, eq. 1.8: the monotonized-central form).
-    const double dm2 = MonotonizedCentral::slope(qm2 - qm3, qm1 - qm2);
     const double dm1 = MonotonizedCentral::slope(qm1 - qm2, q0 - qm1);
     const double d0 = MonotonizedCentral::slope(q0 - qm1, qp1 - q0);
     const double dp1 = MonotonizedCentral::slope(qp1 - q0, qp2 - qp1);
-    const double i_m32 = interface(qm2, qm1, dm2, dm1);  // lower face of cell c − 1
-    const double i_m12 = interface(qm1, q0, dm1, d0);    // the face itself
-    const double i_p12 = interface(q0, qp1, d0, dp1);    // upper face of cell c
-    double al_m1 = i_m32, ar_m1 = i_m12;
-    monotonize(qm1, al_m1, ar_m1);
-    double al_0 = i_m12, ar_0 = i_p12;
-    monotonize(q0, al_0, ar_0);
-    l = ar_m1;
-    r = al_0;
+    lo = interface(qm1, q0, dm1, d0);  // lower face of cell c
+    hi = interface(q0, qp1, d0, dp1);  // upper face of cell c
+    monotonize(q0, lo, hi);
   }
 };
 

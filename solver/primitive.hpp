@@ -58,7 +58,8 @@ template <class Eos>
   const double a2 = eos.sound_speed_sq(rho, pressure);
   const double inv = 1.0 / rho;
   const double va2 = b2 * inv;
-  const double bt2 = std::fmax(b2 - bn * bn, 0.0) * inv;
+  const double bt2_raw = b2 - bn * bn;
+  const double bt2 = (bt2_raw > 0.0 ? bt2_raw : 0.0) * inv;  // a select: fmax is a libm call
   const double d = a2 - va2;
   return std::sqrt(0.5 * (a2 + va2 + std::sqrt(d * d + 4.0 * a2 * bt2)));
 }

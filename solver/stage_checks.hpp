@@ -7,6 +7,7 @@
 #include <cstddef>
 #include <vector>
 
+#include "solver/cell_view.hpp"
 #include "solver/face_flux.hpp"
 #include "solver/primitive.hpp"
 #include "solver/riemann/llf.hpp"
@@ -37,21 +38,20 @@ template <class Eos, bool Magnetic>
 template <class Eos, bool Magnetic>
 void find_unphysical_cells(const State& s, const Eos& eos, std::vector<std::ptrdiff_t>& cells) {
   const BlockGeometry& g = s.geometry;
+  const CellView<Magnetic> u(s);
   cells.clear();
   for (int k = 0; k < g.cells[2]; ++k) {
     for (int j = 0; j < g.cells[1]; ++j) {
       const std::ptrdiff_t row = g.index(0, j, k);
-      bool any = false;
+      int bad = 0;
       for (int i = 0; i < g.cells[0]; ++i) {
         const std::ptrdiff_t c = row + i;
-        any |= !(s.density[c] > 0.0) || !(cell_pressure<Eos, Magnetic>(s, c, eos) > 0.0);
+        bad |= int(!(u.rho[c] > 0.0)) | int(!(u.pressure(c, eos) > 0.0));
       }
-      if (!any) continue;
+      if (bad == 0) continue;
       for (int i = 0; i < g.cells[0]; ++i) {
         const std::ptrdiff_t c = row + i;
-        if (!(s.density[c] > 0.0) || !(cell_pressure<Eos, Magnetic>(s, c, eos) > 0.0)) {
-          cells.push_back(c);
-        }
+        if (!(u.rho[c] > 0.0) || !(u.pressure(c, eos) > 0.0)) cells.push_back(c);
       }
     }
   }
@@ -115,20 +115,25 @@ template <class Eos, bool Magnetic>
 void apply_floors(State& s, double density_floor, double pressure_floor, const Eos& eos,
                   long& density_floors, long& pressure_floors) {
   const BlockGeometry& g = s.geometry;
+  const CellView<Magnetic> u(s);
+  double* rho = s.density.data();
+  double* en = s.energy.data();
   for (int k = 0; k < g.cells[2]; ++k) {
     for (int j = 0; j < g.cells[1]; ++j) {
       const std::ptrdiff_t row = g.index(0, j, k);
       long nd = 0, np = 0;
       for (int i = 0; i < g.cells[0]; ++i) {
         const std::ptrdiff_t c = row + i;
-        const bool low_density = s.density[c] < density_floor;
+        const bool low_density = rho[c] < density_floor;
         nd += long(low_density);
-        s.density[c] = low_density ? density_floor : s.density[c];
+        const double r = low_density ? density_floor : rho[c];
+        rho[c] = r;
         if constexpr (!Eos::isothermal) {
-          const double p = cell_pressure<Eos, Magnetic>(s, c, eos);
+          const double p =
+              pressure_from_conserved(r, u.mx[c], u.my[c], u.mz[c], en[c], u.field_sq(c), eos);
           const bool low_pressure = p < pressure_floor;
           np += long(low_pressure);
-          s.energy[c] += low_pressure ? (pressure_floor - p) / (eos.gamma - 1.0) : 0.0;
+          en[c] += low_pressure ? (pressure_floor - p) / (eos.gamma - 1.0) : 0.0;
         }
       }
       density_floors += nd;

@@ -19,6 +19,13 @@ State make_state(const BlockGeometry& geometry, bool magnetic, bool isothermal) 
   return s;
 }
 
+std::size_t allocated_bytes(const State& s) {
+  std::size_t n = s.density.capacity() + s.energy.capacity();
+  for (int d = 0; d < 3; ++d)
+    n += s.momentum[d].capacity() + s.face_field[d].capacity();
+  return n * sizeof(double);
+}
+
 std::vector<std::vector<double>*> cell_arrays(State& s) {
   std::vector<std::vector<double>*> arrays{&s.density, &s.momentum[0], &s.momentum[1],
                                            &s.momentum[2]};

@@ -32,6 +32,9 @@ struct State {
   return 0.5 * (b[c] + b[c + s.geometry.step(d)]);
 }
 
+// Bytes of the arrays a state holds (their capacity).
+[[nodiscard]] std::size_t allocated_bytes(const State& s);
+
 // Pointers to every cell-centred array of a state (density, momenta, energy if present).
 [[nodiscard]] std::vector<std::vector<double>*> cell_arrays(State& s);
 

@@ -11,6 +11,7 @@
 #include <cmath>
 #include <cstddef>
 
+#include "solver/cell_view.hpp"
 #include "solver/primitive.hpp"
 #include "solver/stage_checks.hpp"
 #include "solver/state.hpp"
@@ -21,30 +22,39 @@ namespace brume::solver {
 template <class Eos, bool Magnetic>
 [[nodiscard]] double max_signal_rate(const State& s, const Eos& eos) {
   const BlockGeometry& g = s.geometry;
+  const CellView<Magnetic> u(s);
+  const double* m3[3] = {u.mx, u.my, u.mz};
   double inv_dx[3];
   for (int d = 0; d < 3; ++d)
     inv_dx[d] = g.active(d) ? 1.0 / g.spacing[d] : 0.0;
-  double rate = 0.0;
+  // Running maxima in 8 lanes (cells i, i + 8, …; the tail repeats the last cell), so that the
+  // loop vectorizes without a reduction of doubles.
+  constexpr int lanes = 8;
+  double lane_rate[lanes] = {0, 0, 0, 0, 0, 0, 0, 0};
+  const int n = g.cells[0];
   for (int k = 0; k < g.cells[2]; ++k) {
     for (int j = 0; j < g.cells[1]; ++j) {
       const std::ptrdiff_t row = g.index(0, j, k);
-      for (int i = 0; i < g.cells[0]; ++i) {
-        const std::ptrdiff_t c = row + i;
-        const double rho = s.density[c];
-        const double inv = 1.0 / rho;
-        const double b2 = cell_field_sq<Magnetic>(s, c);
-        const double p = cell_pressure<Eos, Magnetic>(s, c, eos);
-        double sum = 0.0;
-        for (int d = 0; d < 3; ++d) {
-          double bn = 0.0;
-          if constexpr (Magnetic) bn = cell_field(s, d, c);
-          const double v = std::fabs(s.momentum[d][c] * inv);
-          sum += inv_dx[d] * (v + fast_magnetosonic_speed(rho, p, bn, b2, eos));
+      for (int i0 = 0; i0 < n; i0 += lanes) {
+        for (int m = 0; m < lanes; ++m) {
+          const std::ptrdiff_t c = row + (i0 + m < n ? i0 + m : n - 1);
+          const double rho = u.rho[c];
+          const double inv = 1.0 / rho;
+          const double b2 = u.field_sq(c);
+          const double p = u.pressure(c, eos);
+          double sum = 0.0;
+          for (int d = 0; d < 3; ++d) {
+            const double v = std::fabs(m3[d][c] * inv);
+            sum += inv_dx[d] * (v + fast_magnetosonic_speed(rho, p, u.field(d, c), b2, eos));
+          }
+          lane_rate[m] = sum > lane_rate[m] ? sum : lane_rate[m];
         }
-        rate = std::max(rate, sum);
       }
     }
   }
+  double rate = 0.0;
+  for (const double r : lane_rate)
+    rate = r > rate ? r : rate;
   return rate;
 }
 

@@ -36,6 +36,11 @@ class Vl2Integrator final : public Integrator {
     return options_.courant / max_signal_rate<Eos, Magnetic>(state, eos_);
   }
 
+  [[nodiscard]] std::size_t allocated_bytes() const override {
+    return solver::allocated_bytes(half_) + solver::allocated_bytes(scratch_) +
+           flagged_.capacity() * sizeof(std::ptrdiff_t);
+  }
+
   // Stone & Gardiner 2009, New Astron. 14, 139, §3 (VL2): a half step with first-order fluxes
   // and CT, then the full step from the half-step state with the chosen reconstruction.
   StepReport advance(State& state, double dt) override {
@@ -68,8 +73,8 @@ class Vl2Integrator final : public Integrator {
     }
     for (int d = 0; d < 3; ++d) {
       if (g.active(d)) {
-        flux_sweep<Eos, Magnetic, StageRecon, Solver>(d, dt, eos_, w, source, target,
-                                                      scratch_.planes, scratch_.ct);
+        flux_sweep<Eos, Magnetic, StageRecon, Solver>(d, dt, eos_, w, source, target, scratch_.rows,
+                                                      scratch_.ct);
       } else if constexpr (Magnetic) {
         fill_inactive_face_emf(d, w, source, scratch_.ct);
       }

@@ -58,7 +58,15 @@ Section box() {
                .above(0),
            quantity_key("origin", dim::length, "pc", "Position of the box's lower corner.")
                .three()
-               .with_default("0 pc")},
+               .with_default("0 pc"),
+           integer_key("ranks",
+                       "MPI ranks along x, y and z; their product must be the number of ranks "
+                       "and each must divide box.cells along its axis. 0 lets brume choose "
+                       "(the split with the smallest halo surface); [0, 0, 0] chooses all three.")
+               .three()
+               .with_default("[0, 0, 0]")
+               .at_least(0)
+               .at_most(1048576)},
           {},
           std::nullopt};
 }

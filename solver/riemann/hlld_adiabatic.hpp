@@ -67,7 +67,7 @@ namespace brume::solver {
   const FaceConserved dr = {
       sr.density, sr.mn, sr.density * v1, sr.density * v2, sr.energy + sgn * rr * (vb_r - vb_dstar),
       b1,         b2};
-  return {s.left, sm - abs_bn / rl, sm, sm + abs_bn / rr, s.right, sl, dl, dr, sr};
+  return make_hlld_fan(s.left, sm - abs_bn / rl, sm, sm + abs_bn / rr, s.right, sl, dl, dr, sr);
 }
 
 }  // namespace brume::solver

@@ -17,6 +17,36 @@ struct HlldFan {
   FaceConserved star_left, dstar_left, dstar_right, star_right;
 };
 
+// Member by member: an aggregate copy of the states would keep the fan in memory and stop the
+// vectorization of a row loop that inlines the solver.
+inline void copy_state(FaceConserved& to, const FaceConserved& from) {
+  to.density = from.density;
+  to.mn = from.mn;
+  to.mt1 = from.mt1;
+  to.mt2 = from.mt2;
+  to.energy = from.energy;
+  to.bt1 = from.bt1;
+  to.bt2 = from.bt2;
+}
+
+[[nodiscard]] inline HlldFan make_hlld_fan(double sl, double sal, double sm, double sar, double sr,
+                                           const FaceConserved& star_left,
+                                           const FaceConserved& dstar_left,
+                                           const FaceConserved& dstar_right,
+                                           const FaceConserved& star_right) {
+  HlldFan f;
+  f.sl = sl;
+  f.sal = sal;
+  f.sm = sm;
+  f.sar = sar;
+  f.sr = sr;
+  copy_state(f.star_left, star_left);
+  copy_state(f.dstar_left, dstar_left);
+  copy_state(f.dstar_right, dstar_right);
+  copy_state(f.star_right, star_right);
+  return f;
+}
+
 // Tangential velocity and field behind an outer wave (speed sk) of side K, with normal velocity
 // s_m inside the fan:
 //   v*_t = v_t − b_n b_t (s_m − v_n) / D,   b*_t = b_t (ρ (s_k − v_n)² − b_n²) / D,

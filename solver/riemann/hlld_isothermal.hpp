@@ -47,7 +47,7 @@ namespace brume::solver {
   const double b2 = 0.5 * (tl.bt2 + tr.bt2) + db * (tr.vt2 - tl.vt2);
   const FaceConserved central = {rho, hll.mn, rho * v1, rho * v2, 0.0, b1, b2};
   const double ca = std::abs(bn) / sqrt_rho;
-  return {s.left, sm - ca, sm, sm + ca, s.right, sl, central, central, sr};
+  return make_hlld_fan(s.left, sm - ca, sm, sm + ca, s.right, sl, central, central, sr);
 }
 
 }  // namespace brume::solver

@@ -13,9 +13,11 @@ namespace {
 
 TEST(ConfigCoreSections, SectionsAndKeys) {
   const std::map<std::string, std::vector<std::string>> expected{
-      {"box", {"cells", "size", "origin"}},
+      {"box", {"cells", "size", "origin", "ranks"}},
       {"box.boundaries", {"x_lower", "x_upper", "y_lower", "y_upper", "z_lower", "z_upper"}},
-      {"gas", {"equation_of_state", "adiabatic_index", "sound_speed", "mean_molecular_weight", "magnetized"}},
+      {"gas",
+       {"equation_of_state", "adiabatic_index", "sound_speed", "mean_molecular_weight",
+        "magnetized"}},
       {"units", {"length", "velocity", "number_density"}},
       {"scheme",
        {"reconstruction", "limiter", "characteristic_limiting", "riemann_solver", "courant",

@@ -52,7 +52,7 @@ TEST(EdgeEmf, PlaneParallelProblemGivesTheFaceEmf) {
     for (int i = 0; i <= g.cells[0]; ++i) {
       const std::ptrdiff_t c = g.index(i, j, 0);
       // Tolerance: round-off of a sum of eight O(1) terms.
-      EXPECT_NEAR(scratch.ct.edge_emf[2][c], scratch.ct.face_emf[0][1][c], 1e-14)
+      EXPECT_NEAR(edge_emf_values(scratch.ct, 2)[c], scratch.ct.face_emf[0][1][c], 1e-14)
           << "edge " << i << " " << j;
     }
   }

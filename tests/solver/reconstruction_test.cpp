@@ -12,7 +12,7 @@ namespace {
 
 template <class R>
 void faces_at(const std::vector<double>& q, int c, double& l, double& r) {
-  R::face(ArrayReader{q.data()}, c, 1, l, r);
+  face_states<R>(ArrayReader{q.data()}, c, 1, l, r);
 }
 
 // Linear data are reconstructed exactly by every second-order scheme (common practice).

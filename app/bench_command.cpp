@@ -1,0 +1,126 @@
+// brume bench: cell-updates per second per core and bytes per cell of the main schemes.
+#include <cstdio>
+#include <string>
+#include <vector>
+
+#include "app/bench_case.hpp"
+#include "app/commands.hpp"
+#include "app/user_error.hpp"
+#include "io/provenance.hpp"
+
+namespace brume::app {
+namespace {
+
+int positive_count(const std::optional<std::string>& text, const char* option, int fallback) {
+  if (!text) return fallback;
+  std::size_t used = 0;
+  int value = 0;
+  try {
+    value = std::stoi(*text, &used);
+  } catch (const std::exception&) {
+    used = 0;
+  }
+  if (used != text->size() || value < 1) {
+    throw UserError(std::string("command line: ") + option +
+                    " expects a positive integer, found '" + *text + "'");
+  }
+  return value;
+}
+
+// Default timed steps: about 2.6 million cell-updates per case, at least three steps.
+int default_steps(int cells) {
+  const double per_step = double(cells) * cells * cells;
+  return std::max(3, int(2.7e6 / per_step));
+}
+
+std::vector<BenchCase> bench_cases(const CommandLine& line) {
+  std::vector<int> sizes = {64, 128};
+  if (line.cells) sizes = {positive_count(line.cells, "--cells", 64)};
+  const struct {
+    const char *physics, *reconstruction, *riemann;
+  } schemes[] = {{"mhd", "plm", "hlld"}, {"mhd", "ppm", "hlld"}, {"hydro", "plm", "hllc"}};
+  std::vector<BenchCase> cases;
+  for (const int n : sizes) {
+    if (n < 4) throw UserError("command line: --cells expects at least 4 (a 4³ box)");
+    const int steps = positive_count(line.steps, "--steps", default_steps(n));
+    for (const auto& s : schemes)
+      cases.push_back({s.physics, s.reconstruction, s.riemann, n, steps});
+  }
+  return cases;
+}
+
+std::string provenance_value(const char* name) {
+  for (const auto& [key, value] : io::provenance()) {
+    if (key == name) return value;
+  }
+  return "";
+}
+
+std::string json_string(const std::string& text) {
+  std::string out = "\"";
+  for (const char ch : text) {
+    if (ch == '"' || ch == '\\') out += '\\';
+    if (static_cast<unsigned char>(ch) < 0x20) continue;
+    out += ch;
+  }
+  return out + "\"";
+}
+
+void print_json(const std::vector<BenchResult>& results) {
+  std::printf("{\"cases\": [");
+  for (std::size_t n = 0; n < results.size(); ++n) {
+    const BenchResult& r = results[n];
+    std::printf(
+        "%s\n  {\"physics\": \"%s\", \"reconstruction\": \"%s\", \"riemann\": \"%s\", "
+        "\"cells\": %ld, \"cells_per_dimension\": %d, \"ranks\": %d, \"steps\": %d, "
+        "\"seconds\": %.6g, \"cell_updates_per_second_per_core\": %.6g, "
+        "\"best_step_cell_updates_per_second_per_core\": %.6g, \"bytes_per_cell\": %.6g}",
+        n == 0 ? "" : ",", r.setup.physics.c_str(), r.setup.reconstruction.c_str(),
+        r.setup.riemann.c_str(), r.interior_cells, r.setup.cells, r.ranks, r.setup.steps, r.seconds,
+        r.cell_updates_per_second_per_core, r.best_cell_updates_per_second_per_core,
+        r.bytes_per_cell);
+  }
+  std::printf("\n ],\n \"bytes_per_cell_source\": \"allocated arrays (state and integrator)\",\n");
+  std::printf(" \"compiler\": %s,\n \"flags\": %s}\n",
+              json_string(provenance_value("compiler")).c_str(),
+              json_string(provenance_value("flags")).c_str());
+}
+
+void print_table(const BenchResult& r) {
+  std::printf("%-6s %-4s %-5s %5d³ %5d  %6d  %10.3f  %10.3f  %9.1f\n", r.setup.physics.c_str(),
+              r.setup.reconstruction.c_str(), r.setup.riemann.c_str(), r.setup.cells, r.ranks,
+              r.setup.steps, 1e-6 * r.cell_updates_per_second_per_core,
+              1e-6 * r.best_cell_updates_per_second_per_core, r.bytes_per_cell);
+  std::fflush(stdout);
+}
+
+}  // namespace
+
+int bench_command(const CommandLine& line, const io::Log& log) {
+  if (!line.positional.empty()) {
+    throw UserError(
+        "command line: brume bench takes no argument ([--json] [--cells N] [--steps N])");
+  }
+  const std::vector<BenchCase> cases = bench_cases(line);
+  const bool table = !line.json && log.speaks();
+  if (table) {
+    std::printf("3D periodic box, smooth flow, VL2 + CT, CFL 0.4; one warm-up step not timed\n");
+    std::printf("%-6s %-4s %-5s %6s %5s  %6s  %10s  %10s  %9s\n", "physics", "rec", "flux", "cells",
+                "ranks", "steps", "M upd/s/c", "best step", "B/cell");
+  }
+  std::vector<BenchResult> results;
+  for (const BenchCase& c : cases) {
+    results.push_back(run_bench_case(c));
+    if (table) print_table(results.back());
+  }
+  if (table) {
+    std::printf(
+        "M upd/s/c: million cell-updates per second per core over all timed steps "
+        "(time-step limit + step);\nbest step: the same for the fastest step; "
+        "B/cell: bytes of all allocated arrays per interior cell\n");
+  }
+  if (line.json && log.speaks()) print_json(results);
+  return 0;
+}
+
+}  // namespace brume::app
