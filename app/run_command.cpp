@@ -13,6 +13,7 @@
 #include "app/run_setup.hpp"
 #include "app/schema.hpp"
 #include "app/scheme_choice.hpp"
+#include "app/snapshot_schedule.hpp"
 #include "app/user_error.hpp"
 #include "io/atomic_file.hpp"
 #include "io/config/load.hpp"
@@ -62,6 +63,20 @@ void on_rank_zero(MPI_Comm comm, const std::function<void()>& action) {
   message.resize(static_cast<std::size_t>(length));
   MPI_Bcast(message.data(), length, MPI_CHAR, 0, comm);
   throw UserError(message);
+}
+
+// What every snapshot of this run carries besides the fields.
+io::SnapshotInfo snapshot_info(const config::ResolvedConfig& config, const RunSetup& setup) {
+  const units::CodeUnits& u = setup.code_units;
+  io::SnapshotInfo info;
+  info.global_cells = setup.cells;
+  info.lower = setup.lower;
+  info.size = setup.size;
+  info.units = {u.length,     u.time(),          u.density, u.density * u.velocity,
+                u.pressure(), u.magnetic_field()};
+  info.configuration = config.to_yaml(false);
+  info.single_precision = config.text("output.precision") == "float32";
+  return info;
 }
 
 }  // namespace
@@ -137,8 +152,19 @@ int run_command(const CommandLine& line, const io::Log& log_in, const MpiSession
   limits.progress_interval = config.real("output.progress_interval");
   limits.time_unit = units::cgs::megayear / setup.code_units.time();
   const MPI_Comm comm = decomposition->comm();
+  SnapshotSchedule snapshots(folder, snapshot_info(config, setup),
+                             config.real("output.snapshot_interval") / setup.code_units.time(),
+                             comm, log);
+  snapshots.write(state, "initial");
+  const RunHooks hooks{[&] { return snapshots.next_time(); },
+                       [&](const solver::State& s) { snapshots.after_step(s); }};
   const RunTotals before = totals(state, comm);
-  const RunSummary summary = run_loop(*integrator, state, limits, log, *decomposition);
+  const RunSummary summary = run_loop(*integrator, state, limits, log, *decomposition, hooks);
+  if (summary.end == RunEnd::numerical_failure) {
+    snapshots.write_failure(state);
+  } else if (state.time > 0.0) {
+    snapshots.write(state, "final");
+  }
   const std::string report = run_report(summary, before, totals(state, comm), state, limits);
   log.info(report);
   on_rank_zero(comm, [&] { io::write_file_atomically(folder / "summary.txt", report + "\n"); });

@@ -10,7 +10,8 @@
 namespace brume::app {
 
 RunSummary run_loop(solver::Integrator& integrator, solver::State& state, const RunLimits& limits,
-                    const io::Log& log, const solver::Decomposition& decomposition) {
+                    const io::Log& log, const solver::Decomposition& decomposition,
+                    const RunHooks& hooks) {
   using Clock = std::chrono::steady_clock;
   const auto start = Clock::now();
   const MPI_Comm comm = decomposition.comm();
@@ -35,8 +36,9 @@ RunSummary run_loop(solver::Integrator& integrator, solver::State& state, const 
       summary.end = RunEnd::wall_budget;
       break;
     }
-    // The last step lands on the stop time exactly.
-    const double dt = std::min(agreed.time_step, limits.stop_time - state.time);
+    // The last step lands on the stop time exactly, and steps land on scheduled outputs.
+    const double next_output = std::min(hooks.next_output(), limits.stop_time);
+    const double dt = std::min(agreed.time_step, next_output - state.time);
     if (!(dt > 0.0) || !std::isfinite(dt)) {
       summary.end = RunEnd::time_step_collapse;
       summary.last_dt = dt;
@@ -54,6 +56,7 @@ RunSummary run_loop(solver::Integrator& integrator, solver::State& state, const 
       summary.failure = report.failure;
       break;
     }
+    hooks.after_step(state);
     sample.step = state.step;
     sample.time = state.time / limits.time_unit;
     sample.dt = dt / limits.time_unit;

@@ -4,6 +4,8 @@
 // every rank takes the same steps and the summary is the same everywhere.
 #pragma once
 
+#include <functional>
+
 #include "io/log.hpp"
 #include "solver/decomposition.hpp"
 #include "solver/integrator.hpp"
@@ -35,8 +37,17 @@ struct RunSummary {
 };
 
 // Collective over the decomposition's communicator; `state` is this rank's block.
+// What the loop calls besides the integrator: outputs on their schedule.
+struct RunHooks {
+  // Simulated time of the next scheduled output (code units; +inf when none): steps land on it.
+  std::function<double()> next_output;
+  // Called on every rank after every successful step.
+  std::function<void(const solver::State&)> after_step;
+};
+
 [[nodiscard]] RunSummary run_loop(solver::Integrator& integrator, solver::State& state,
                                   const RunLimits& limits, const io::Log& log,
-                                  const solver::Decomposition& decomposition);
+                                  const solver::Decomposition& decomposition,
+                                  const RunHooks& hooks);
 
 }  // namespace brume::app

@@ -16,9 +16,9 @@ if(BRUME_SANITIZE)
 endif()
 target_include_directories(brume_flags INTERFACE ${PROJECT_SOURCE_DIR} ${PROJECT_BINARY_DIR}/generated)
 
-# g++ 12 reports -Wmaybe-uninitialized inside its own AVX-512 intrinsics when Eigen's vectorized
-# kernels are inlined (a false positive of the compiler, not of brume); targets that use Eigen's
-# dense solvers turn that one warning off.
+# g++ 12 reports -Wmaybe-uninitialized and -Warray-bounds inside its own AVX-512 intrinsics when
+# Eigen's vectorized kernels are inlined (false positives of the compiler, not of brume); targets
+# that use Eigen's dense solvers turn those two warnings off.
 function(brume_allow_eigen_intrinsics target)
-  target_compile_options(${target} PRIVATE -Wno-maybe-uninitialized)
+  target_compile_options(${target} PRIVATE -Wno-maybe-uninitialized -Wno-array-bounds)
 endfunction()

@@ -1,22 +1,8 @@
-// GCC 12 reports false positives (maybe-uninitialized, array-bounds) inside Eigen's AVX-512
-// kernels when built with -march=native on AVX-512 machines; they concern Eigen's inlined
-// intrinsics, not this file, so they are silenced for this translation unit only (before any
-// header pulls in the intrinsics).
-#pragma GCC diagnostic ignored "-Wmaybe-uninitialized"
-#pragma GCC diagnostic ignored "-Warray-bounds"
-
 #include "problems/linear_wave_eigenmode.hpp"
 
-// brume_problems does not carry Eigen's include path yet; Debian installs it under eigen3/.
-#if __has_include(<Eigen/Dense>)
 #include <Eigen/Dense>
 #include <Eigen/Eigenvalues>
 #include <Eigen/SVD>
-#else
-#include <eigen3/Eigen/Dense>
-#include <eigen3/Eigen/Eigenvalues>
-#include <eigen3/Eigen/SVD>
-#endif
 
 #include <algorithm>
 #include <cmath>

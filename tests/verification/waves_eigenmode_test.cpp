@@ -3,11 +3,6 @@
 // (tests/reference/mhd_eigen.hpp: complex-step Jacobian of the conserved flux): two independent
 // computations of the same right eigenvectors and speeds.
 
-// GCC 12 false positives inside Eigen's AVX-512 kernels with -march=native (see
-// problems/linear_wave_eigenmode.cpp); silenced before any header pulls in the intrinsics.
-#pragma GCC diagnostic ignored "-Wmaybe-uninitialized"
-#pragma GCC diagnostic ignored "-Warray-bounds"
-
 #include <gtest/gtest.h>
 
 #include <cmath>

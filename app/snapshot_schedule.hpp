@@ -1,0 +1,47 @@
+// When and where a run writes its snapshots: the initial state, one every output.snapshot_interval
+// of simulated time, the final state, and a diagnostic snapshot when the step fails.
+#pragma once
+
+#include <mpi.h>
+
+#include <filesystem>
+#include <string>
+
+#include "io/log.hpp"
+#include "io/snapshot.hpp"
+#include "solver/state.hpp"
+
+namespace brume::app {
+
+class SnapshotSchedule {
+ public:
+  // interval: simulated time between snapshots (code units), 0 for none between first and last.
+  SnapshotSchedule(std::filesystem::path folder, io::SnapshotInfo info, double interval,
+                   MPI_Comm comm, const io::Log& log);
+
+  // Writes snapshot-NNNN.h5 (the next number) with the given reason, unless this step was written
+  // already. Collective.
+  void write(const solver::State& state, const std::string& reason);
+  // Writes failure-stepN.h5: the state as the failed step left it. Collective.
+  void write_failure(const solver::State& state);
+
+  // Simulated time of the next scheduled snapshot (+inf when none is scheduled).
+  [[nodiscard]] double next_time() const;
+  // Writes the scheduled snapshot when `state` has reached its time. Collective.
+  void after_step(const solver::State& state);
+
+ private:
+  void write_file(const std::filesystem::path& file, const solver::State& state,
+                  const std::string& reason);
+
+  std::filesystem::path folder_;
+  io::SnapshotInfo info_;
+  double interval_;
+  double next_;
+  int count_ = 0;
+  long last_step_ = -1;
+  MPI_Comm comm_;
+  const io::Log& log_;
+};
+
+}  // namespace brume::app
