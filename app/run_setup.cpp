@@ -1,9 +1,13 @@
 #include "app/run_setup.hpp"
 
+#include <unistd.h>
+
 #include <algorithm>
 #include <cmath>
 #include <cstdio>
 
+#include "app/scheme_choice.hpp"
+#include "solver/box_boundaries.hpp"
 #include "solver/units/constants.hpp"
 
 namespace brume::app {
@@ -44,6 +48,36 @@ std::string number(double value, const char* unit = "") {
   char text[64];
   std::snprintf(text, sizeof text, *unit ? "%.4g %s" : "%.4g", value, unit);
   return text;
+}
+
+struct MemoryEstimate {
+  double total_bytes = 0.0;
+  double bytes_per_cell = 0.0;
+};
+
+// The arrays of the state and the integrator scale with the stored cells (interior and ghosts) of
+// a block: measure them on a small block with the same scheme and scale to the box on one rank.
+MemoryEstimate memory_estimate(const config::ResolvedConfig& config, const RunSetup& s) {
+  const solver::SchemeOptions options = scheme_options(config, s);
+  const int ghosts = solver::required_ghost_layers(options);
+  std::array<int, 3> small{};
+  std::array<int, 3> cells{};
+  for (int d = 0; d < 3; ++d) {
+    cells[d] = static_cast<int>(s.cells[d]);
+    small[d] = s.cells[d] > 1 ? 8 : 1;
+  }
+  const auto probe_geometry = solver::whole_box_geometry(small, {0, 0, 0}, {1, 1, 1}, ghosts);
+  const auto box_geometry = solver::whole_box_geometry(cells, {0, 0, 0}, {1, 1, 1}, ghosts);
+  const solver::State probe = solver::make_state(probe_geometry, s.magnetic, s.isothermal);
+  const auto integrator = solver::make_integrator(
+      options, probe_geometry, std::make_shared<solver::BoxGhostFiller>(box_boundaries(config)));
+  const double per_stored_cell =
+      double(solver::allocated_bytes(probe) + integrator->allocated_bytes()) /
+      double(probe_geometry.storage_size());
+  MemoryEstimate estimate;
+  estimate.total_bytes = per_stored_cell * double(box_geometry.storage_size());
+  estimate.bytes_per_cell = estimate.total_bytes / double(box_geometry.interior_cells());
+  return estimate;
 }
 
 }  // namespace
@@ -100,6 +134,14 @@ std::vector<std::pair<std::string, std::string>> derived_quantities(
     add("flow-crossing time of the box",
         number(box / typical.speed * u.time() / cgs::megayear, "Myr"));
   }
+  const MemoryEstimate memory = memory_estimate(config, s);
+  const double machine = double(sysconf(_SC_PHYS_PAGES)) * double(sysconf(_SC_PAGE_SIZE));
+  add("memory estimate",
+      number(memory.total_bytes / 1.0e9, "GB") + " on one rank (" +
+          number(memory.bytes_per_cell, "bytes per cell") + ")" +
+          (memory.total_bytes > machine
+               ? "; more than this machine's " + number(machine / 1.0e9, "GB") + ": use more ranks"
+               : ""));
   if (inverse_crossing > 0.0) {
     // The solver's limit: Courant number over Σ_d (|v| + c_f) / Δx_d (solver/time_step.hpp).
     const double dt = config.real("scheme.courant") / ((typical.speed + c_f) * inverse_crossing);
