@@ -48,8 +48,9 @@ TEST(Commands, VersionNamesBuildAndLibraries) {
 TEST(Commands, CheckPrintsResolvedConfigurationAndDerivedQuantities) {
   const auto r = run_brume("check '" + source + "/problems/demo.yaml'");
   ASSERT_EQ(r.exit_code, 0) << r.err;
-  for (const char* word : {"valid", "cells: [64, 64, 64]", "limiter: mc", "Derived quantities",
-                           "code time: 0.9778 Myr", "cell size: 0.3125 pc", "sound speed", "memory estimate"}) {
+  for (const char* word :
+       {"valid", "cells: [64, 64, 64]", "limiter: mc", "Derived quantities",
+        "code time: 0.9778 Myr", "cell size: 0.3125 pc", "sound speed", "memory estimate"}) {
     EXPECT_NE(r.out.find(word), std::string::npos) << word << " in\n" << r.out;
   }
 }
