@@ -37,7 +37,8 @@ RunSummary run_loop(solver::Integrator& integrator, solver::State& state, const 
       break;
     }
     // The last step lands on the stop time exactly, and steps land on scheduled outputs.
-    const double next_output = std::min(hooks.next_output(), limits.stop_time);
+    const double next_output =
+        hooks.next_output ? std::min(hooks.next_output(), limits.stop_time) : limits.stop_time;
     const double dt = std::min(agreed.time_step, next_output - state.time);
     if (!(dt > 0.0) || !std::isfinite(dt)) {
       summary.end = RunEnd::time_step_collapse;
@@ -56,7 +57,7 @@ RunSummary run_loop(solver::Integrator& integrator, solver::State& state, const 
       summary.failure = report.failure;
       break;
     }
-    hooks.after_step(state);
+    if (hooks.after_step) hooks.after_step(state);
     sample.step = state.step;
     sample.time = state.time / limits.time_unit;
     sample.dt = dt / limits.time_unit;

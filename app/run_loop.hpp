@@ -39,15 +39,16 @@ struct RunSummary {
 // Collective over the decomposition's communicator; `state` is this rank's block.
 // What the loop calls besides the integrator: outputs on their schedule.
 struct RunHooks {
-  // Simulated time of the next scheduled output (code units; +inf when none): steps land on it.
+  // Simulated time of the next scheduled output (code units; none or +inf: no output): steps
+  // land on it.
   std::function<double()> next_output;
-  // Called on every rank after every successful step.
+  // Called on every rank after every successful step (may be empty).
   std::function<void(const solver::State&)> after_step;
 };
 
 [[nodiscard]] RunSummary run_loop(solver::Integrator& integrator, solver::State& state,
                                   const RunLimits& limits, const io::Log& log,
                                   const solver::Decomposition& decomposition,
-                                  const RunHooks& hooks);
+                                  const RunHooks& hooks = {});
 
 }  // namespace brume::app
