@@ -6,7 +6,7 @@ set -euo pipefail
 here=$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)
 config="$here/problems/demo.yaml"
 
-bash "$here/scripts/build.sh" release
+bash "$here/scripts/build.sh" release brume
 export OMPI_ALLOW_RUN_AS_ROOT=1 OMPI_ALLOW_RUN_AS_ROOT_CONFIRM=1
 export OMPI_MCA_pml=ob1 OMPI_MCA_btl=self,vader
 ranks=$(nproc 2>/dev/null || echo 1)
