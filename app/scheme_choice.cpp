@@ -38,6 +38,9 @@ solver::SchemeOptions scheme_options(const config::ResolvedConfig& config, const
   options.limiter = config.text("scheme.limiter") == "van_leer"
                         ? solver::SlopeLimiter::van_leer
                         : solver::SlopeLimiter::monotonized_central;
+  options.ppm_limiter = config.text("scheme.ppm_limiter") == "extremum_preserving"
+                            ? solver::PpmLimiter::extremum_preserving
+                            : solver::PpmLimiter::monotone;
   options.characteristic = config.flag("scheme.characteristic_limiting");
   options.riemann = riemann(config.text("scheme.riemann_solver"));
   options.eos = setup.isothermal ? solver::GasModel::isothermal : solver::GasModel::ideal_gas;

@@ -9,6 +9,7 @@ BlockGeometry whole_box_geometry(std::array<int, 3> cells, std::array<double, 3>
   BlockGeometry g;
   g.cells = cells;
   g.ghost_layers = ghost_layers;
+  g.box_lower = lower;
   g.lower = lower;
   for (int d = 0; d < 3; ++d) {
     if (cells[d] < 1 || !(upper[d] > lower[d])) {

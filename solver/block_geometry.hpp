@@ -13,10 +13,13 @@
 namespace brume::solver {
 
 struct BlockGeometry {
-  std::array<int, 3> cells{1, 1, 1};       // interior cells per dimension
-  int ghost_layers = 2;                    // ghost layers in each active dimension
-  std::array<long, 3> offset{0, 0, 0};     // global index of the first interior cell
-  std::array<double, 3> lower{0, 0, 0};    // lower corner of the block
+  std::array<int, 3> cells{1, 1, 1};         // interior cells per dimension
+  int ghost_layers = 2;                      // ghost layers in each active dimension
+  std::array<long, 3> offset{0, 0, 0};       // global index of the first interior cell
+  std::array<double, 3> box_lower{0, 0, 0};  // lower corner of the whole box
+  // Lower corner of the block, for reports only: positions are computed from the global index
+  // (centre, face), so that a cell has the same coordinates in every decomposition.
+  std::array<double, 3> lower{0, 0, 0};
   std::array<double, 3> spacing{1, 1, 1};  // cell size
 
   [[nodiscard]] bool active(int d) const { return cells[d] > 1; }
@@ -42,9 +45,24 @@ struct BlockGeometry {
   [[nodiscard]] std::ptrdiff_t index(int i, int j, int k) const {
     return (i + ghosts(0)) + stride(1) * (j + ghosts(1)) + stride(2) * (k + ghosts(2));
   }
-  [[nodiscard]] double centre(int d, int i) const { return lower[d] + (i + 0.5) * spacing[d]; }
-  // Coordinate of the lower face of cell i along d.
-  [[nodiscard]] double face(int d, int i) const { return lower[d] + i * spacing[d]; }
+  // Interior-relative position (i, j, k) of linear index c (the inverse of index).
+  [[nodiscard]] std::array<int, 3> position(std::ptrdiff_t c) const {
+    std::array<int, 3> p{};
+    for (int d = 0; d < 3; ++d) {
+      p[d] = int(c % extent(d)) - ghosts(d);
+      c /= extent(d);
+    }
+    return p;
+  }
+  // Centre of cell i along d, from its global index: box_lower + (offset + i + ½) dx rounds the
+  // same way whatever block holds the cell (box_lower + offset dx, then + (i + ½) dx, would not).
+  [[nodiscard]] double centre(int d, int i) const {
+    return box_lower[d] + (double(offset[d] + i) + 0.5) * spacing[d];
+  }
+  // Coordinate of the lower face of cell i along d, from its global index as well.
+  [[nodiscard]] double face(int d, int i) const {
+    return box_lower[d] + double(offset[d] + i) * spacing[d];
+  }
 };
 
 // A block that is the whole box [lower, upper] with the given cells per dimension.

@@ -1,6 +1,9 @@
 #include "solver/box_boundaries.hpp"
 
+#include <algorithm>
 #include <cstddef>
+
+#include "solver/boundary_layer_flags.hpp"
 
 namespace brume::solver {
 namespace {
@@ -75,6 +78,18 @@ void BoxGhostFiller::fill(State& state) const {
       }
     }
   }
+}
+
+void BoxGhostFiller::exchange_flags(const BlockGeometry& g,
+                                    std::vector<std::ptrdiff_t>& cells) const {
+  const std::size_t interior = cells.size();
+  for (int axis = 0; axis < 3; ++axis) {
+    if (g.active(axis) && boundaries_.lower[axis] == BoundaryKind::periodic &&
+        boundaries_.upper[axis] == BoundaryKind::periodic) {
+      append_periodic_images(cells, interior, g, axis);
+    }
+  }
+  if (cells.size() != interior) std::sort(cells.begin(), cells.end());
 }
 
 }  // namespace brume::solver

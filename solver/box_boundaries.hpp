@@ -26,6 +26,9 @@ class BoxGhostFiller final : public GhostFiller {
  public:
   explicit BoxGhostFiller(const BoxBoundaries& boundaries) : boundaries_(boundaries) {}
   void fill(State& state) const override;
+  // Across a periodic wrap the block is its own neighbour: the flags of its first (last) layer
+  // are those of its upper (lower) ghost layer.
+  void exchange_flags(const BlockGeometry& g, std::vector<std::ptrdiff_t>& cells) const override;
 
  private:
   BoxBoundaries boundaries_;

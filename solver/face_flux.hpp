@@ -6,6 +6,7 @@
 #include <cstddef>
 
 #include "solver/block_geometry.hpp"
+#include "solver/characteristic_plm.hpp"
 #include "solver/reconstruction.hpp"
 #include "solver/riemann/face_state.hpp"
 #include "solver/stage_scratch.hpp"
@@ -44,9 +45,10 @@ struct FaceReaders {
   return r;
 }
 
-// Flux through the lower d-face of cell c.
+// Flux through the lower d-face of cell c, each variable reconstructed on its own.
 template <class Eos, bool Magnetic, class Recon, class Solver>
-[[nodiscard]] inline FaceFlux face_flux(const FaceReaders& r, std::ptrdiff_t c, const Eos& eos) {
+[[nodiscard]] inline FaceFlux face_flux_by_variable(const FaceReaders& r, std::ptrdiff_t c,
+                                                    const Eos& eos) {
   const std::ptrdiff_t s = r.step;
   FaceState left{}, right{};
   face_states<Recon>(r.density, c, s, left.density, right.density);
@@ -66,6 +68,28 @@ template <class Eos, bool Magnetic, class Recon, class Solver>
     bn = r.bn[c];
   }
   return Solver::template flux<Eos, Magnetic>(left, right, bn, eos);
+}
+
+// Flux through the lower d-face of cell c.
+template <class Eos, bool Magnetic, class Recon, class Solver>
+[[nodiscard]] inline FaceFlux face_flux(const FaceReaders& r, std::ptrdiff_t c, const Eos& eos) {
+  if constexpr (limits_characteristics<Recon>) {
+    const std::ptrdiff_t s = r.step;
+    FaceState left{}, right{};
+    // The same edges as the sweep's characteristic row (characteristic_plm.hpp).
+    double lo[kWaveVariables], hi[kWaveVariables], unused[kWaveVariables];
+    Recon::template cell_edges<Eos, Magnetic>(r, c - s, eos, unused, hi);
+    Recon::template cell_edges<Eos, Magnetic>(r, c, eos, lo, unused);
+    left = {hi[0], hi[1], hi[2], hi[3], hi[4], hi[5], hi[6]};
+    right = {lo[0], lo[1], lo[2], lo[3], lo[4], lo[5], lo[6]};
+    if constexpr (Eos::isothermal) {
+      left.pressure = eos.sound_speed_sq(left.density, 0.0) * left.density;
+      right.pressure = eos.sound_speed_sq(right.density, 0.0) * right.density;
+    }
+    return Solver::template flux<Eos, Magnetic>(left, right, Magnetic ? r.bn[c] : 0.0, eos);
+  } else {
+    return face_flux_by_variable<Eos, Magnetic, Recon, Solver>(r, c, eos);
+  }
 }
 
 }  // namespace brume::solver

@@ -11,6 +11,7 @@
 #include <cstddef>
 #include <cstdint>
 
+#include "solver/characteristic_plm.hpp"
 #include "solver/face_flux.hpp"
 #include "solver/riemann_row.hpp"
 #include "solver/stage_scratch.hpp"
@@ -36,9 +37,10 @@ struct FaceRange {
 
 namespace sweep_detail {
 
-// Edges of the n cells from c0 for every reconstructed variable, into row set `set`.
+// Edges of the n cells from c0, each variable reconstructed on its own, into row set `set`.
 template <class Eos, bool Magnetic, class Recon>
-void reconstruct_cells(const FaceReaders& q, std::ptrdiff_t c0, int n, SweepRows& rows, int set) {
+void reconstruct_variables(const FaceReaders& q, std::ptrdiff_t c0, int n, SweepRows& rows,
+                           int set) {
   const std::ptrdiff_t s = q.step;
   auto row = [&](const auto& reader, int v) {
     reconstruct_row<Recon>(reader, c0, s, n, rows.edge(set, 0, v), rows.edge(set, 1, v));
@@ -51,6 +53,24 @@ void reconstruct_cells(const FaceReaders& q, std::ptrdiff_t c0, int n, SweepRows
   if constexpr (Magnetic) {
     row(q.bt1, 5);
     row(q.bt2, 6);
+  }
+}
+
+// Edges of the n cells from c0 for every reconstructed variable, into row set `set`; a
+// characteristic reconstruction does all variables in one pass.
+template <class Eos, bool Magnetic, class Recon>
+void reconstruct_cells(const FaceReaders& q, std::ptrdiff_t c0, int n, SweepRows& rows, int set,
+                       const Eos& eos) {
+  if constexpr (limits_characteristics<Recon>) {
+    double* lo[SweepRows::variables];
+    double* hi[SweepRows::variables];
+    for (int v = 0; v < SweepRows::variables; ++v) {
+      lo[v] = rows.edge(set, 0, v);
+      hi[v] = rows.edge(set, 1, v);
+    }
+    reconstruct_characteristic_row<Recon, Eos, Magnetic>(q, c0, n, eos, lo, hi);
+  } else {
+    reconstruct_variables<Eos, Magnetic, Recon>(q, c0, n, rows, set);
   }
 }
 
@@ -122,7 +142,8 @@ void flux_sweep(int d, double dt, const Eos& eos, const PrimitiveArrays& w, cons
     // Cells i0 − 1 … hi − 1 of the row: face i lies between buffer cells i − i0 and i − i0 + 1.
     for (int k = range.lo[2]; k < range.hi[2]; ++k) {
       for (int j = range.lo[1]; j < range.hi[1]; ++j) {
-        reconstruct_cells<Eos, Magnetic, Recon>(readers, g.index(i0 - 1, j, k), faces + 1, rows, 0);
+        reconstruct_cells<Eos, Magnetic, Recon>(readers, g.index(i0 - 1, j, k), faces + 1, rows, 0,
+                                                eos);
         solve(side_states(rows, 0, 1, 0), side_states(rows, 0, 0, 1), g.index(i0, j, k), 0);
         if (j < 0 || j >= g.cells[1] || k < 0 || k >= g.cells[2]) continue;
         const auto lower = flux_rows(0, -i0), upper = flux_rows(0, 1 - i0);
@@ -143,7 +164,7 @@ void flux_sweep(int d, double dt, const Eos& eos, const PrimitiveArrays& w, cons
   for (int o = range.lo[o_axis]; o < range.hi[o_axis]; ++o) {
     for (int m = range.lo[d] - 1; m < range.hi[d]; ++m) {
       const int set = m & 1, below = (m - 1) & 1;
-      reconstruct_cells<Eos, Magnetic, Recon>(readers, index(m, o), faces, rows, set);
+      reconstruct_cells<Eos, Magnetic, Recon>(readers, index(m, o), faces, rows, set, eos);
       if (m < range.lo[d]) continue;
       // Face row m: between cell rows m − 1 (upper edges) and m (lower edges).
       solve(side_states(rows, below, 1, 0), side_states(rows, set, 0, 0), index(m, o), set);

@@ -1,7 +1,10 @@
 #include "solver/halo_exchange.hpp"
 
+#include <algorithm>
 #include <cstddef>
 #include <stdexcept>
+
+#include "solver/boundary_layer_flags.hpp"
 
 namespace brume::solver {
 
@@ -31,6 +34,11 @@ void for_each_slot(const BlockGeometry& g, int axis, int p0, int count, Visit&& 
 
 constexpr int tag_towards_lower = 0;  // a block's lower layers, sent to its lower neighbour
 constexpr int tag_towards_upper = 1;
+// Fallback flags along `axis` towards the lower (upper) neighbour: tags apart from the fill's,
+// one per axis, since two axes may have the same neighbour.
+constexpr int flags_tag(int axis, int towards) {
+  return 2 + 2 * axis + towards;
+}
 
 }  // namespace
 
@@ -57,6 +65,8 @@ HaloExchange::HaloExchange(const Decomposition& decomposition, const BoxBoundari
     for (int side = 0; side < 2; ++side) {
       send_[d][side].assign(size, 0.0);
       receive_[d][side].assign(size, 0.0);
+      flags_send_[d][side].assign(layer_plane_size(block, d), 0);
+      flags_receive_[d][side].assign(layer_plane_size(block, d), 0);
     }
   }
 }
@@ -164,6 +174,54 @@ void HaloExchange::exchange_axis(const std::array<Field, 8>& f, int count, int a
       for_each_slot(block_, axis, n, down_layers(f[a]), [&](std::ptrdiff_t s) { q[s] = *in++; });
     }
   }
+}
+
+void HaloExchange::exchange_flags(const BlockGeometry& g,
+                                  std::vector<std::ptrdiff_t>& cells) const {
+  if (g.cells != block_.cells || g.ghost_layers != block_.ghost_layers) {
+    throw std::invalid_argument("halo exchange: the flags are not of the exchange's block");
+  }
+  const std::size_t interior = cells.size();
+  std::array<MPI_Request, 12> requests;
+  requests.fill(MPI_REQUEST_NULL);
+  int r = 0;
+  for (int axis = 0; axis < 3; ++axis) {
+    if (!g.active(axis) || self_periodic_[axis]) continue;
+    const int size = int(layer_plane_size(g, axis));
+    const int lower = neighbours_[axis][0], upper = neighbours_[axis][1];
+    auto& out = flags_send_[axis];
+    auto& in = flags_receive_[axis];
+    MPI_Irecv(in[0].data(), size, MPI_UNSIGNED_CHAR, lower, flags_tag(axis, tag_towards_upper),
+              comm_, &requests[std::size_t(r++)]);
+    MPI_Irecv(in[1].data(), size, MPI_UNSIGNED_CHAR, upper, flags_tag(axis, tag_towards_lower),
+              comm_, &requests[std::size_t(r++)]);
+    mark_layer(cells, interior, g, axis, 0, out[0].data());
+    mark_layer(cells, interior, g, axis, g.cells[axis] - 1, out[1].data());
+    MPI_Isend(out[0].data(), size, MPI_UNSIGNED_CHAR, lower, flags_tag(axis, tag_towards_lower),
+              comm_, &requests[std::size_t(r++)]);
+    MPI_Isend(out[1].data(), size, MPI_UNSIGNED_CHAR, upper, flags_tag(axis, tag_towards_upper),
+              comm_, &requests[std::size_t(r++)]);
+  }
+  for (int axis = 0; axis < 3; ++axis) {
+    if (g.active(axis) && self_periodic_[axis]) append_periodic_images(cells, interior, g, axis);
+  }
+  MPI_Waitall(r, requests.data(), MPI_STATUSES_IGNORE);
+  for (int axis = 0; axis < 3; ++axis) {
+    if (!g.active(axis) || self_periodic_[axis]) continue;
+    if (neighbours_[axis][0] != MPI_PROC_NULL) {
+      append_marked_layer(flags_receive_[axis][0].data(), g, axis, -1, cells);
+    }
+    if (neighbours_[axis][1] != MPI_PROC_NULL) {
+      append_marked_layer(flags_receive_[axis][1].data(), g, axis, g.cells[axis], cells);
+    }
+  }
+  if (cells.size() != interior) std::sort(cells.begin(), cells.end());
+}
+
+bool HaloExchange::any_block(bool local) const {
+  int mine = local ? 1 : 0, any = 0;
+  MPI_Allreduce(&mine, &any, 1, MPI_INT, MPI_LOR, comm_);
+  return any != 0;
 }
 
 }  // namespace brume::solver

@@ -11,11 +11,15 @@
 // 0, so both hold bitwise the same value whatever the two blocks computed. At a periodic wrap the
 // first block along d owns the box's face (its face 0 is also the last block's face n). At a
 // non-periodic box face the block at that face owns it.
+//
+// Fallback flags (exchange_flags) travel along all three axes at once: only the cells across a
+// block face matter to the fallback, not those across edges or corners.
 #pragma once
 
 #include <mpi.h>
 
 #include <array>
+#include <cstddef>
 #include <vector>
 
 #include "solver/box_boundaries.hpp"
@@ -32,6 +36,10 @@ class HaloExchange final : public GhostFiller {
                const BlockGeometry& block, bool magnetic, bool isothermal);
   // Collective over the decomposition's communicator: every rank must call it.
   void fill(State& state) const override;
+  // Collective: the flags of the first and last interior layers go to the neighbours.
+  void exchange_flags(const BlockGeometry& g, std::vector<std::ptrdiff_t>& cells) const override;
+  // Collective: a logical or over every rank.
+  [[nodiscard]] bool any_block(bool local) const override;
 
  private:
   // One stored array as the exchange along an axis sees it.
@@ -54,6 +62,9 @@ class HaloExchange final : public GhostFiller {
   // [axis][side]: side 0 is the lower side of the block, side 1 the upper side.
   mutable std::array<std::array<std::vector<double>, 2>, 3> send_;
   mutable std::array<std::array<std::vector<double>, 2>, 3> receive_;
+  // Planes of fallback flags, [axis][side] as above.
+  mutable std::array<std::array<std::vector<unsigned char>, 2>, 3> flags_send_;
+  mutable std::array<std::array<std::vector<unsigned char>, 2>, 3> flags_receive_;
 };
 
 }  // namespace brume::solver

@@ -13,13 +13,19 @@ namespace brume::solver {
 
 enum class Reconstruction { donor_cell, plm, ppm };
 enum class SlopeLimiter { monotonized_central, van_leer };
+// PPM limiters: Colella & Sekora 2008 (keeps smooth extrema) or Colella & Woodward 1984.
+enum class PpmLimiter { extremum_preserving, monotone };
 enum class RiemannSolver { llf, hlle, hllc, hlld };
 enum class GasModel { ideal_gas, isothermal };
 
 struct SchemeOptions {
   Reconstruction reconstruction = Reconstruction::plm;
   SlopeLimiter limiter = SlopeLimiter::monotonized_central;
-  bool characteristic = false;  // characteristic limiting: not available yet (rejected)
+  // Monotone by default: the extremum-preserving limiter switches discontinuously between its
+  // extremum and overshoot cases (a last-bit change of the data can move an edge by O(Δq)), and
+  // it is less robust near vacuum (tests/solver/limiter_oscillation_test.cpp, robustness_test).
+  PpmLimiter ppm_limiter = PpmLimiter::monotone;
+  bool characteristic = false;  // PLM slopes limited in characteristic variables
   RiemannSolver riemann = RiemannSolver::hlle;
   GasModel eos = GasModel::ideal_gas;
   double gamma = 5.0 / 3.0;  // ideal gas
@@ -46,7 +52,8 @@ class Integrator {
 [[nodiscard]] int required_ghost_layers(const SchemeOptions& options);
 
 // Throws std::invalid_argument for impossible combinations (HLLC with MHD, HLLD for
-// hydrodynamics, characteristic limiting, too few ghost layers, non-positive parameters).
+// hydrodynamics, characteristic limiting with other than PLM, too few ghost layers,
+// non-positive parameters).
 [[nodiscard]] std::unique_ptr<Integrator> make_integrator(
     const SchemeOptions& options, const BlockGeometry& geometry,
     std::shared_ptr<const GhostFiller> ghosts);

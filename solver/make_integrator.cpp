@@ -11,17 +11,19 @@ int required_ghost_layers(const SchemeOptions& options) {
     case Reconstruction::donor_cell:
       return DonorCell::stencil;
     case Reconstruction::plm:
-      return Plm<MonotonizedCentral>::stencil;
+      return options.characteristic ? PlmCharacteristicMonotonizedCentral::stencil
+                                    : PlmMonotonizedCentral::stencil;
     case Reconstruction::ppm:
-      return Ppm::stencil;
+      return options.ppm_limiter == PpmLimiter::monotone ? Ppm::stencil
+                                                         : PpmExtremumPreserving::stencil;
   }
   return Ppm::stencil;
 }
 
 std::unique_ptr<Integrator> make_integrator(const SchemeOptions& o, const BlockGeometry& g,
                                             std::shared_ptr<const GhostFiller> ghosts) {
-  if (o.characteristic) {
-    throw std::invalid_argument("scheme: characteristic limiting is not available yet");
+  if (o.characteristic && o.reconstruction != Reconstruction::plm) {
+    throw std::invalid_argument("scheme: characteristic limiting is available with plm only");
   }
   if (!(o.courant > 0.0) || !(o.density_floor > 0.0) || !(o.pressure_floor > 0.0)) {
     throw std::invalid_argument("scheme: courant number and floors must be positive");

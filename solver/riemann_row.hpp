@@ -6,6 +6,7 @@
 #include <cstdint>
 
 #include "solver/riemann/face_state.hpp"
+#include "solver/riemann/mass_flux_sign.hpp"
 
 namespace brume::solver {
 
@@ -16,7 +17,8 @@ struct FaceRowStates {
 };
 
 // Fluxes of a row of faces; emf1 = E_t1 = flux of B_t2, emf2 = E_t2 = −flux of B_t1, and the
-// sign of the mass flux (MHD only; nullptr for hydrodynamics).
+// sign of the mass flux, zero when negligible (mass_flux_sign; MHD only; nullptr for
+// hydrodynamics).
 struct FluxRow {
   double *density, *mn, *mt1, *mt2, *energy;
   double *emf1, *emf2;
@@ -59,7 +61,7 @@ template <class Eos, bool Magnetic, class Solver>
   }
   if constexpr (Magnetic) {
     for (int m = 0; m < n; ++m) {
-      out.sign[m] = std::int8_t(int(out.density[m] > 0.0) - int(out.density[m] < 0.0));
+      out.sign[m] = mass_flux_sign(out.density[m], left.density[m] + right.density[m], out.mn[m]);
     }
   }
 }

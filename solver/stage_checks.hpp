@@ -3,8 +3,10 @@
 #pragma once
 
 #include <algorithm>
+#include <array>
 #include <cmath>
 #include <cstddef>
+#include <tuple>
 #include <vector>
 
 #include "solver/cell_view.hpp"
@@ -58,20 +60,23 @@ void find_unphysical_cells(const State& s, const Eos& eos, std::vector<std::ptrd
 }
 
 [[nodiscard]] inline bool is_interior(const BlockGeometry& g, std::ptrdiff_t c) {
-  std::ptrdiff_t rest = c;
-  for (int d = 0; d < 3; ++d) {
-    const std::ptrdiff_t e = g.extent(d);
-    const std::ptrdiff_t p = rest % e - g.ghosts(d);
-    rest /= e;
-    if (p < 0 || p >= g.cells[d]) return false;
-  }
-  return true;
+  const std::array<int, 3> p = g.position(c);
+  return p[0] >= 0 && p[0] < g.cells[0] && p[1] >= 0 && p[1] < g.cells[1] && p[2] >= 0 &&
+         p[2] < g.cells[2];
 }
 
 // Replaces the fluxes through every face of the listed cells by first-order fluxes (donor cell and
-// local Lax–Friedrichs), correcting both cells of each face so the update stays conservative;
-// each face shared by two listed cells is replaced once. The field (CT) update is kept.
-// The positivity fallback is common practice, no source (DESIGN.md §3).
+// local Lax–Friedrichs), correcting the interior cells on both sides of each face so the update
+// stays conservative. The field (CT) update is kept. The positivity fallback is common practice,
+// no source (DESIGN.md §3).
+//
+// `cells` is ascending and holds this block's flagged cells and, in its first ghost layer, those
+// of the neighbouring blocks (GhostFiller::exchange_flags): a face between two blocks is then
+// replaced on both, with the same flux, and each block corrects its own cell. A face is replaced
+// once (a face shared by two listed cells belongs to the lower one); faces with no interior cell
+// on either side are skipped. Each cell receives its corrections in the same order whatever the
+// list holds besides — x faces, then y, then z; lower face before upper — so the result is the
+// same in every decomposition.
 template <class Eos, bool Magnetic, class Recon, class Solver>
 void first_order_fallback(const std::vector<std::ptrdiff_t>& cells, double dt, const Eos& eos,
                           const PrimitiveArrays& w, const State& source, State& target) {
@@ -86,14 +91,17 @@ void first_order_fallback(const std::vector<std::ptrdiff_t>& cells, double dt, c
       for (int side = 0; side < 2; ++side) {
         const std::ptrdiff_t face = side == 0 ? c : c + s;
         if (side == 0 && std::binary_search(cells.begin(), cells.end(), c - s)) continue;
+        // The cell below the face loses dt/dx ΔF, the cell above gains it.
+        const std::ptrdiff_t below = face - s, above = face;
+        const bool correct_below = is_interior(g, below), correct_above = is_interior(g, above);
+        if (!correct_below && !correct_above) continue;
         const FaceFlux high = face_flux<Eos, Magnetic, Recon, Solver>(readers, face, eos);
         const FaceFlux low = face_flux<Eos, Magnetic, DonorCell, Llf>(readers, face, eos);
         const double delta[5] = {low.density - high.density, low.mn - high.mn, low.mt1 - high.mt1,
                                  low.mt2 - high.mt2, low.energy - high.energy};
-        // The cell below the face loses dt/dx ΔF, the cell above gains it.
-        const std::ptrdiff_t below = face - s, above = face;
-        for (const auto& [cell, sign] : {std::pair{below, -1.0}, std::pair{above, 1.0}}) {
-          if (!is_interior(g, cell)) continue;
+        for (const auto& [cell, sign, correct] :
+             {std::tuple{below, -1.0, correct_below}, std::tuple{above, 1.0, correct_above}}) {
+          if (!correct) continue;
           const double f = sign * dt_dx;
           target.density[cell] += f * delta[0];
           target.momentum[d][cell] += f * delta[1];

@@ -4,6 +4,7 @@
 #include <memory>
 #include <stdexcept>
 
+#include "solver/characteristic_plm.hpp"
 #include "solver/ppm.hpp"
 #include "solver/reconstruction.hpp"
 #include "solver/riemann/solvers.hpp"
@@ -20,6 +21,15 @@ std::unique_ptr<Integrator> make_vl2_with_solver(const SchemeOptions& o, const B
       case Reconstruction::donor_cell:
         return std::make_unique<Vl2Integrator<Eos, Magnetic, DonorCell, Solver>>(o, g, ghosts, eos);
       case Reconstruction::plm:
+        if (o.characteristic) {
+          if (o.limiter == SlopeLimiter::van_leer) {
+            return std::make_unique<Vl2Integrator<Eos, Magnetic, PlmCharacteristicVanLeer, Solver>>(
+                o, g, ghosts, eos);
+          }
+          return std::make_unique<
+              Vl2Integrator<Eos, Magnetic, PlmCharacteristicMonotonizedCentral, Solver>>(
+              o, g, ghosts, eos);
+        }
         if (o.limiter == SlopeLimiter::van_leer) {
           return std::make_unique<Vl2Integrator<Eos, Magnetic, PlmVanLeer, Solver>>(o, g, ghosts,
                                                                                     eos);
@@ -27,7 +37,11 @@ std::unique_ptr<Integrator> make_vl2_with_solver(const SchemeOptions& o, const B
         return std::make_unique<Vl2Integrator<Eos, Magnetic, PlmMonotonizedCentral, Solver>>(
             o, g, ghosts, eos);
       case Reconstruction::ppm:
-        return std::make_unique<Vl2Integrator<Eos, Magnetic, Ppm, Solver>>(o, g, ghosts, eos);
+        if (o.ppm_limiter == PpmLimiter::monotone) {
+          return std::make_unique<Vl2Integrator<Eos, Magnetic, Ppm, Solver>>(o, g, ghosts, eos);
+        }
+        return std::make_unique<Vl2Integrator<Eos, Magnetic, PpmExtremumPreserving, Solver>>(
+            o, g, ghosts, eos);
     }
     throw std::invalid_argument("scheme: unknown reconstruction");
   } else {

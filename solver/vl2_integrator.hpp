@@ -43,23 +43,25 @@ class Vl2Integrator final : public Integrator {
 
   // Stone & Gardiner 2009, New Astron. 14, 139, §3 (VL2): a half step with first-order fluxes
   // and CT, then the full step from the half-step state with the chosen reconstruction.
+  // Every block makes the same collective calls (ghost fills, flag exchanges, agreement on a
+  // failure) whatever happens on it: a stage that fails on any block ends the step on all of them,
+  // each left as one block spanning the box would be.
   StepReport advance(State& state, double dt) override {
     StepReport report;
     ghosts_->fill(state);
-    stage<DonorCell>(state, state, half_, 0.5 * dt, 1, report);
-    if (!report.ok()) return report;
+    if (!stage<DonorCell>(state, state, half_, 0.5 * dt, 1, report)) return report;
     ghosts_->fill(half_);
-    stage<Recon>(half_, state, state, dt, 2, report);
-    if (!report.ok()) return report;
+    if (!stage<Recon>(half_, state, state, dt, 2, report)) return report;
     state.time += dt;
     state.step += 1;
     return report;
   }
 
  private:
-  // target = base − dt ∇·F(source), target B = base B − dt ∇×E(source); then the checks.
+  // target = base − dt ∇·F(source), target B = base B − dt ∇×E(source); then the checks. False
+  // when a non-finite value appeared on any block (this block's failure, if any, in `report`).
   template <class StageRecon>
-  void stage(const State& source, const State& base, State& target, double dt, int index,
+  bool stage(const State& source, const State& base, State& target, double dt, int index,
              StepReport& report) {
     const BlockGeometry& g = source.geometry;
     PrimitiveArrays& w = scratch_.primitive;
@@ -85,20 +87,22 @@ class Vl2Integrator final : public Integrator {
       ct_update(scratch_.ct, dt, base, target);
     }
     find_unphysical_cells<Eos, Magnetic>(target, eos_, flagged_);
+    report.fallback_cells += long(flagged_.size());
+    ghosts_->exchange_flags(g, flagged_);  // adds the neighbours' flags across block faces
     if (!flagged_.empty()) {
       first_order_fallback<Eos, Magnetic, StageRecon, Solver>(flagged_, dt, eos_, w, source,
                                                               target);
-      report.fallback_cells += long(flagged_.size());
     }
     NumericalFailure failure = find_non_finite(target);
     if (failure.occurred) {
       failure.step = base.step;
       failure.stage = index;
       report.failure = failure;
-      return;
     }
+    if (ghosts_->any_block(failure.occurred)) return false;
     apply_floors<Eos, Magnetic>(target, options_.density_floor, options_.pressure_floor, eos_,
                                 report.density_floors, report.pressure_floors);
+    return true;
   }
 
   SchemeOptions options_;

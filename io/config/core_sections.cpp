@@ -147,8 +147,14 @@ Section scheme() {
                        {"van_leer", "Harmonic-mean slope limiter of van Leer."}},
                       "Slope limiter of the piecewise-linear reconstruction.")
                .with_default("mc"),
+           choice_key("ppm_limiter",
+                      {{"extremum_preserving",
+                        "Keeps smooth extrema, flattens only jumps (Colella & Sekora 2008)."},
+                       {"monotone", "Flattens every extremum (Colella & Woodward 1984)."}},
+                      "Limiter of the piecewise-parabolic reconstruction.")
+               .with_default("monotone"),
            flag_key("characteristic_limiting",
-                    "Limit slopes in characteristic rather than primitive variables.")
+                    "Limit PLM slopes in characteristic rather than primitive variables.")
                .with_default("false"),
            choice_key("riemann_solver",
                       {{"llf", "Local Lax-Friedrichs."},

@@ -20,8 +20,8 @@ TEST(ConfigCoreSections, SectionsAndKeys) {
         "magnetized"}},
       {"units", {"length", "velocity", "number_density"}},
       {"scheme",
-       {"reconstruction", "limiter", "characteristic_limiting", "riemann_solver", "courant",
-        "density_floor", "pressure_floor"}},
+       {"reconstruction", "limiter", "ppm_limiter", "characteristic_limiting", "riemann_solver",
+        "courant", "density_floor", "pressure_floor"}},
       {"clock", {"stop_time", "max_steps", "wall_budget"}},
       {"output", {"folder", "snapshot_interval", "progress_interval", "precision"}},
       {"problem", {"name"}}};

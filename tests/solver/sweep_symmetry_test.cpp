@@ -56,9 +56,13 @@ State shock_tube_along(int axis, int n, int transverse) {
   return s;
 }
 
-void run_symmetry(int transverse) {
+void run_symmetry(int transverse, Reconstruction recon = Reconstruction::plm,
+                  bool characteristic = false,
+                  PpmLimiter ppm_limiter = PpmLimiter::extremum_preserving) {
   SchemeOptions o;
-  o.reconstruction = Reconstruction::plm;
+  o.reconstruction = recon;
+  o.characteristic = characteristic;
+  o.ppm_limiter = ppm_limiter;
   o.riemann = RiemannSolver::hlle;
   o.gamma = 2.0;
   BoxBoundaries b;
@@ -109,6 +113,12 @@ TEST(SweepSymmetry, ShockTubeAlongXYZIsIdenticalIn1D) {
 }
 TEST(SweepSymmetry, ShockTubeAlongXYZIsIdenticalIn3DBox) {
   run_symmetry(4);
+}
+TEST(SweepSymmetry, ShockTubeAlongXYZIsIdenticalIn3DBoxWithCharacteristicLimiting) {
+  run_symmetry(4, Reconstruction::plm, true);
+}
+TEST(SweepSymmetry, ShockTubeAlongXYZIsIdenticalIn3DBoxWithExtremumPreservingPpm) {
+  run_symmetry(4, Reconstruction::ppm);
 }
 
 }  // namespace

@@ -2,6 +2,7 @@
 #include <gtest/gtest.h>
 
 #include <cmath>
+#include <stdexcept>
 #include <string>
 
 #include "tests/solver/solver_test_support.hpp"
@@ -16,6 +17,7 @@ struct Case {
   RiemannSolver riemann;
   GasModel eos;
   bool magnetic;
+  bool characteristic;
 };
 
 std::string case_name(const ::testing::TestParamInfo<Case>& param_info) {
@@ -24,7 +26,7 @@ std::string case_name(const ::testing::TestParamInfo<Case>& param_info) {
   const char* riemann_names[] = {"Llf", "Hlle", "Hllc", "Hlld"};
   return std::string(recon_names[int(c.recon)]) + riemann_names[int(c.riemann)] +
          (c.eos == GasModel::isothermal ? "Isothermal" : "Adiabatic") +
-         (c.magnetic ? "Mhd" : "Hydro");
+         (c.magnetic ? "Mhd" : "Hydro") + (c.characteristic ? "Characteristic" : "");
 }
 
 class UniformState : public ::testing::TestWithParam<Case> {};
@@ -36,6 +38,7 @@ TEST_P(UniformState, StaysUniformToRoundOff) {
   o.riemann = p.riemann;
   o.eos = p.eos;
   o.magnetic = p.magnetic;
+  o.characteristic = p.characteristic;
   o.gamma = 1.4;
   o.sound_speed = 0.7;
   State s = make_box_state({8, 6, 4}, p.magnetic, p.eos == GasModel::isothermal);
@@ -78,16 +81,34 @@ TEST_P(UniformState, StaysUniformToRoundOff) {
 
 INSTANTIATE_TEST_SUITE_P(
     AllSchemes, UniformState,
-    ::testing::Values(Case{Reconstruction::donor_cell, RiemannSolver::llf, GasModel::ideal_gas,
-                           true},
-                      Case{Reconstruction::plm, RiemannSolver::hlle, GasModel::ideal_gas, true},
-                      Case{Reconstruction::ppm, RiemannSolver::hlle, GasModel::isothermal, true},
-                      Case{Reconstruction::plm, RiemannSolver::hllc, GasModel::ideal_gas, false},
-                      Case{Reconstruction::ppm, RiemannSolver::hllc, GasModel::isothermal, false},
-                      Case{Reconstruction::plm, RiemannSolver::llf, GasModel::isothermal, false},
-                      Case{Reconstruction::plm, RiemannSolver::hlld, GasModel::ideal_gas, true},
-                      Case{Reconstruction::ppm, RiemannSolver::hlld, GasModel::isothermal, true}),
+    ::testing::Values(
+        Case{Reconstruction::donor_cell, RiemannSolver::llf, GasModel::ideal_gas, true, false},
+        Case{Reconstruction::plm, RiemannSolver::hlle, GasModel::ideal_gas, true, false},
+        Case{Reconstruction::ppm, RiemannSolver::hlle, GasModel::isothermal, true, false},
+        Case{Reconstruction::plm, RiemannSolver::hllc, GasModel::ideal_gas, false, false},
+        Case{Reconstruction::ppm, RiemannSolver::hllc, GasModel::isothermal, false, false},
+        Case{Reconstruction::plm, RiemannSolver::llf, GasModel::isothermal, false, false},
+        Case{Reconstruction::plm, RiemannSolver::hlld, GasModel::ideal_gas, true, false},
+        Case{Reconstruction::ppm, RiemannSolver::hlld, GasModel::isothermal, true, false},
+        Case{Reconstruction::plm, RiemannSolver::hlld, GasModel::ideal_gas, true, true},
+        Case{Reconstruction::plm, RiemannSolver::hlld, GasModel::isothermal, true, true},
+        Case{Reconstruction::plm, RiemannSolver::hllc, GasModel::ideal_gas, false, true},
+        Case{Reconstruction::plm, RiemannSolver::hlle, GasModel::isothermal, false, true}),
     case_name);
+
+// Characteristic limiting is implemented for PLM only; other reconstructions are refused rather
+// than silently run without it (integrator.hpp contract; common practice, no source).
+TEST(CharacteristicLimiting, IsRefusedWithOtherThanPlm) {
+  SchemeOptions o;
+  o.characteristic = true;
+  const State s = make_box_state({8, 1, 1}, true, false);
+  o.reconstruction = Reconstruction::ppm;
+  EXPECT_THROW((void)make_integrator(o, s.geometry, periodic_box()), std::invalid_argument);
+  o.reconstruction = Reconstruction::donor_cell;
+  EXPECT_THROW((void)make_integrator(o, s.geometry, periodic_box()), std::invalid_argument);
+  o.reconstruction = Reconstruction::plm;
+  EXPECT_NE(make_integrator(o, s.geometry, periodic_box()), nullptr);
+}
 
 }  // namespace
 }  // namespace brume::solver

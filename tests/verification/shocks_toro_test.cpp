@@ -144,13 +144,54 @@ TEST_P(ToroTube, StarStateWithinOnePercentAndL1ErrorFalls) {
   EXPECT_LT(pr.worst, tc.cell_bound);
 }
 
+// Test 2 at 400 cells misses 1 % (mean ρ 9.9 %, p 40 %) with every combination tried: HLLC
+// and HLLE agree to 0.1 %, PPM (ρ −18 %, p 36 %), van Leer (p 62 %), donor cell (p 158 %) and
+// Courant numbers 0.1–0.8 do no better; no floor or fallback acts. The sampled "plateau" still
+// carries the smeared tails of the two rarefactions (u = ±0.05 at its ends where u* = 0, against
+// c* = 0.35), and p* = 0.5 % of the initial pressure makes p the most sensitive quantity. A
+// defect would not converge; this error does, at first order: mean p error 0.40, 0.21, 0.098,
+// 0.041 at 400, 800, 1600, 3200 cells (and 0.8 % at 12800), measured. Checked: the mean plateau
+// pressure error falls by ≥ 1.6 per doubling (first-order convergence allows for the 1.9–2.4
+// measured; common practice, no source), and at 3200 cells p within 6 % and ρ within 4 %
+// (measured 4.1 % and 2.6 %; ρ converges unevenly, +10 %, −0.3 %, −3.2 %, −2.6 %).
+TEST(ToroNearVacuum, StarStateOfTest2ConvergesAtFirstOrder) {
+  const reference::ExactRiemann exact = exact_solution("toro2");
+  const auto& star = exact.star();
+  const auto [left_edge, right_edge] = star_region(exact);
+  std::array<double, 4> p_error{}, rho_error{};
+  for (int r = 0; r < 4; ++r) {
+    const int n = 400 << r;
+    const TubeRun run = run_preset("toro2", cells_along_x(n));
+    ASSERT_FALSE(run.failed) << n;
+    const Profile p = profile(run);
+    const double margin = 6 * run.state.geometry.spacing[0], t = run.stop_time;
+    Plateau rho, pr;
+    for (std::size_t i = 0; i < p.size(); ++i) {
+      if (p.x[i] < run.interface + left_edge * t + margin) continue;
+      if (p.x[i] > run.interface + right_edge * t - margin) continue;
+      pr.add(p.pressure[i] / star.pressure - 1.0);
+      rho.add(p.density[i] / star.density_left - 1.0);
+    }
+    ASSERT_GE(pr.count, 10) << n;
+    p_error[std::size_t(r)] = std::fabs(pr.mean());
+    rho_error[std::size_t(r)] = std::fabs(rho.mean());
+    std::printf("toro2 n=%d plateau %d cells: mean rel. error rho %.4f p %.4f\n", n, pr.count,
+                rho_error[std::size_t(r)], p_error[std::size_t(r)]);
+  }
+  for (std::size_t r = 1; r < 4; ++r)
+    EXPECT_GT(p_error[r - 1] / p_error[r], 1.6) << r;
+  EXPECT_LT(p_error[3], 0.06);
+  EXPECT_LT(rho_error[3], 0.04);
+}
+
 INSTANTIATE_TEST_SUITE_P(
     Table41, ToroTube,
     // Bounds: the 1 % target wherever brume meets it. Test 2 (the 123 problem) leaves a near-vacuum
-    // star region, p* = 0.5 % of the initial pressure, 30 cells wide: conservative schemes err
-    // there in internal energy (Toro 2009 §6.4, from memory); measured at 400 cells mean ρ 9.9 %,
-    // p 40 %: bounds 12 % and 50 %. Tests 3–5: single cells next to the narrow plateaus and the
-    // post-shock noise of the slow left shock of test 5 reach 1.6–3.4 % (measured): 4 %.
+    // star region, p* = 0.5 % of the initial pressure, 30 cells wide at 400 cells, not yet
+    // resolved there (see ToroNearVacuum.StarStateOfTest2ConvergesAtFirstOrder): measured mean ρ
+    // 9.9 %, p 40 %: bounds 12 % and 50 % guard these figures. Tests 3–5: single cells next to the
+    // narrow plateaus and the post-shock noise of the slow left shock of test 5 reach 1.6–3.4 %
+    // (measured): 4 %.
     ::testing::Values(
         ToroCase{"toro1", 0.30313, 0.92745, 0.42632, 0.26557, 1e-3, 0.01, 0.01, 0.01},
         ToroCase{"toro2", 0.00189, 0.0, 0.02185, 0.02185, 3e-3, 0.12, 0.5, 0.5},
