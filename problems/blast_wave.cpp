@@ -1,6 +1,7 @@
 #include "problems/blast_wave.hpp"
 
 #include <cmath>
+#include <numbers>
 
 #include "problems/cell_fill.hpp"
 #include "problems/face_field_setup.hpp"
@@ -10,7 +11,7 @@ namespace brume::problems {
 namespace {
 
 constexpr const char* prefix = "problem.blast_wave.";
-constexpr double pi = 3.14159265358979323846;
+constexpr double pi = std::numbers::pi;
 
 config::Section section() {
   return {

@@ -1,6 +1,7 @@
 #include "problems/orszag_tang.hpp"
 
 #include <cmath>
+#include <numbers>
 
 #include "problems/cell_fill.hpp"
 #include "problems/face_field_setup.hpp"
@@ -10,7 +11,7 @@ namespace brume::problems {
 namespace {
 
 constexpr const char* prefix = "problem.orszag_tang.";
-constexpr double pi = 3.14159265358979323846;
+constexpr double pi = std::numbers::pi;
 
 // Defaults: ρ = 25/(36π), p = 5/(12π), |v| = 1 and, in code units (B²/2 is the magnetic energy),
 // |B| = 1/√(4π), i.e. B = 1 in Gaussian units: sound speed 1, β = 10/3 (from memory).
