@@ -149,6 +149,7 @@ int run_command(const CommandLine& line, const io::Log& log_in, const MpiSession
   limits.stop_time = config.real("clock.stop_time") / setup.code_units.time();
   limits.max_steps = config.integer("clock.max_steps");
   limits.wall_budget = config.real("clock.wall_budget");
+  limits.floor_limit = config.real("scheme.floor_limit");
   limits.progress_interval = config.real("output.progress_interval");
   limits.time_unit = units::cgs::megayear / setup.code_units.time();
   const MPI_Comm comm = decomposition->comm();
@@ -160,7 +161,10 @@ int run_command(const CommandLine& line, const io::Log& log_in, const MpiSession
                        [&](const solver::State& s) { snapshots.after_step(s); }};
   const RunTotals before = totals(state, comm);
   const RunSummary summary = run_loop(*integrator, state, limits, log, *decomposition, hooks);
-  if (summary.end == RunEnd::numerical_failure) {
+  const bool failed = summary.end == RunEnd::numerical_failure ||
+                      summary.end == RunEnd::floors_exhausted ||
+                      summary.end == RunEnd::time_step_collapse;
+  if (failed) {
     snapshots.write_failure(state);
   } else if (state.time > 0.0) {
     snapshots.write(state, "final");
@@ -168,10 +172,7 @@ int run_command(const CommandLine& line, const io::Log& log_in, const MpiSession
   const std::string report = run_report(summary, before, totals(state, comm), state, limits);
   log.info(report);
   on_rank_zero(comm, [&] { io::write_file_atomically(folder / "summary.txt", report + "\n"); });
-  if (summary.end == RunEnd::numerical_failure || summary.end == RunEnd::time_step_collapse) {
-    return exit_numerical_failure;
-  }
-  return exit_success;
+  return failed ? exit_numerical_failure : exit_success;
 }
 
 }  // namespace brume::app

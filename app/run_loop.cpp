@@ -19,6 +19,7 @@ RunSummary run_loop(solver::Integrator& integrator, solver::State& state, const 
   io::Progress progress(log, limits.progress_interval, limits.time_unit_name);
   const long long cells = (long long)box_cells[0] * box_cells[1] * box_cells[2];
   RunSummary summary;
+  summary.box_cells = cells;
   io::ProgressSample sample;
   sample.cells = cells;
   sample.stop_time = limits.stop_time / limits.time_unit;
@@ -55,6 +56,13 @@ RunSummary run_loop(solver::Integrator& integrator, solver::State& state, const 
     if (!report.ok()) {
       summary.end = RunEnd::numerical_failure;
       summary.failure = report.failure;
+      break;
+    }
+    const long long floored = report.density_floors + report.pressure_floors;
+    if (double(floored) > limits.floor_limit * double(cells)) {
+      summary.end = RunEnd::floors_exhausted;
+      summary.failure = report.first_floored;
+      summary.floored_in_step = floored;
       break;
     }
     if (hooks.after_step) hooks.after_step(state);

@@ -17,23 +17,33 @@ struct RunLimits {
   double stop_time = 0.0;        // code units
   long long max_steps = 0;       // 0: no limit
   double wall_budget = 0.0;      // seconds; 0: no limit
+  double floor_limit = 1.0;      // largest fraction of the cells floored in one step
   double progress_interval = 5;  // wall seconds between progress lines
   double time_unit = 1.0;        // code time unit in the unit progress lines show (Myr)
   const char* time_unit_name = "Myr";
 };
 
-enum class RunEnd { stop_time, step_limit, wall_budget, numerical_failure, time_step_collapse };
+enum class RunEnd {
+  stop_time,
+  step_limit,
+  wall_budget,
+  numerical_failure,
+  time_step_collapse,
+  floors_exhausted
+};
 
 struct RunSummary {
   RunEnd end = RunEnd::stop_time;
   long long steps = 0;
   double wall_seconds = 0.0;
+  long long box_cells = 0;     // cells of the whole box
   long long cell_updates = 0;  // over the whole box
   long long density_floors = 0;
   long long pressure_floors = 0;
   long long fallback_cells = 0;
-  solver::NumericalFailure failure;
-  double last_dt = 0.0;  // the offending time step when the step collapsed
+  solver::NumericalFailure failure;  // the non-finite cell, or the first floored cell
+  long long floored_in_step = 0;     // cell-stages floored in the step that exhausted the floors
+  double last_dt = 0.0;              // the offending time step when the step collapsed
 };
 
 // Collective over the decomposition's communicator; `state` is this rank's block.

@@ -48,8 +48,23 @@ const char* end_text(RunEnd end) {
       return "stopped on a numerical failure";
     case RunEnd::time_step_collapse:
       return "stopped: the time step collapsed";
+    case RunEnd::floors_exhausted:
+      return "stopped: the floors acted on too many cells";
   }
   return "?";
+}
+
+// "at step S (stage s), t = …, cell (i, j, k): density …, momentum (…), energy …".
+std::string cell_text(const solver::NumericalFailure& f, const solver::State& state,
+                      const RunLimits& limits) {
+  char text[512];
+  std::snprintf(text, sizeof text,
+                "at step %ld (stage %d), t = %.6g %s, cell (%ld, %ld, %ld): density %.6g, momentum "
+                "(%.6g, %.6g, %.6g), energy %.6g",
+                f.step, f.stage, state.time / limits.time_unit, limits.time_unit_name, f.cell[0],
+                f.cell[1], f.cell[2], f.density, f.momentum[0], f.momentum[1], f.momentum[2],
+                f.energy);
+  return text;
 }
 
 double relative_change(double before, double after) {
@@ -74,14 +89,15 @@ std::string run_report(const RunSummary& s, const RunTotals& before, const RunTo
                 state.isothermal ? 0.0 : relative_change(before.energy, after.energy));
   report = text;
   if (s.end == RunEnd::numerical_failure) {
-    const auto& f = s.failure;
-    std::snprintf(text, sizeof text,
-                  "\n  non-finite value at step %ld (stage %d), t = %.6g %s, cell (%ld, %ld, %ld):"
-                  " density %.6g, momentum (%.6g, %.6g, %.6g), energy %.6g",
-                  f.step, f.stage, state.time / limits.time_unit, limits.time_unit_name, f.cell[0],
-                  f.cell[1], f.cell[2], f.density, f.momentum[0], f.momentum[1], f.momentum[2],
-                  f.energy);
-    report += text;
+    report += "\n  non-finite value " + cell_text(s.failure, state, limits);
+  } else if (s.end == RunEnd::floors_exhausted) {
+    std::snprintf(
+        text, sizeof text,
+        "\n  floors acted %lld times in one step, %.3g of the %lld cells (scheme.floor_limit"
+        " = %.3g); first floored ",
+        s.floored_in_step, double(s.floored_in_step) / double(s.box_cells), s.box_cells,
+        limits.floor_limit);
+    report += text + cell_text(s.failure, state, limits) + " (before the floor)";
   } else if (s.end == RunEnd::time_step_collapse) {
     std::snprintf(text, sizeof text, "\n  time step %.6g at step %ld, t = %.6g %s", s.last_dt,
                   state.step, state.time / limits.time_unit, limits.time_unit_name);

@@ -23,9 +23,9 @@ struct StepAgreement {
 [[nodiscard]] double global_minimum(double value, MPI_Comm comm);
 [[nodiscard]] long long global_sum(long long value, MPI_Comm comm);
 
-// Counts summed over all blocks; of the failures, the earliest stage and within it the cell first
-// in global (k, j, i) order — what one block spanning the box reports. `box_cells` are the cell
-// counts of the whole box. Collective.
+// Counts summed over all blocks; of the failures (and of the floored cells), the earliest stage
+// and within it the cell first in global (k, j, i) order — what one block spanning the box reports.
+// `box_cells` are the cell counts of the whole box. Collective.
 [[nodiscard]] StepReport combine_step_reports(const StepReport& local,
                                               const std::array<long, 3>& box_cells, MPI_Comm comm);
 

@@ -117,35 +117,56 @@ void first_order_fallback(const std::vector<std::ptrdiff_t>& cells, double dt, c
 // The first interior cell with a non-finite conserved value, if any.
 [[nodiscard]] NumericalFailure find_non_finite(const State& s);
 
-// Density floor (momentum kept) and pressure floor (thermal energy raised to p_floor); returns the
-// counts in `density_floors`, `pressure_floors`. Common practice, no source.
+// Density floor (momentum kept) and pressure floor (thermal energy raised to p_floor); adds the
+// counts to `density_floors`, `pressure_floors` and records the first cell floored (its values
+// before the floor) in `first` unless it holds one already. Common practice, no source.
 template <class Eos, bool Magnetic>
 void apply_floors(State& s, double density_floor, double pressure_floor, const Eos& eos,
-                  long& density_floors, long& pressure_floors) {
+                  long& density_floors, long& pressure_floors, NumericalFailure& first) {
   const BlockGeometry& g = s.geometry;
   const CellView<Magnetic> u(s);
   double* rho = s.density.data();
   double* en = s.energy.data();
+  auto pressure = [&](std::ptrdiff_t c, double r) {
+    return pressure_from_conserved(r, u.mx[c], u.my[c], u.mz[c], en[c], u.field_sq(c), eos);
+  };
   for (int k = 0; k < g.cells[2]; ++k) {
     for (int j = 0; j < g.cells[1]; ++j) {
       const std::ptrdiff_t row = g.index(0, j, k);
-      long nd = 0, np = 0;
+      // Read-only count first: rows without a floored cell (nearly all) are not written.
+      int any = 0;
+      for (int i = 0; i < g.cells[0]; ++i) {
+        const std::ptrdiff_t c = row + i;
+        const double r = std::max(rho[c], density_floor);
+        any |= int(rho[c] < density_floor);
+        if constexpr (!Eos::isothermal) any |= int(pressure(c, r) < pressure_floor);
+      }
+      if (any == 0) continue;
       for (int i = 0; i < g.cells[0]; ++i) {
         const std::ptrdiff_t c = row + i;
         const bool low_density = rho[c] < density_floor;
-        nd += long(low_density);
         const double r = low_density ? density_floor : rho[c];
+        bool low_pressure = false;
+        double p = 0.0;
+        if constexpr (!Eos::isothermal) {
+          p = pressure(c, r);
+          low_pressure = p < pressure_floor;
+        }
+        if (!low_density && !low_pressure) continue;
+        if (!first.occurred) {
+          first.occurred = true;
+          first.cell = {g.offset[0] + i, g.offset[1] + j, g.offset[2] + k};
+          first.density = rho[c];
+          first.momentum = {u.mx[c], u.my[c], u.mz[c]};
+          first.energy = Eos::isothermal ? 0.0 : en[c];
+        }
+        density_floors += long(low_density);
+        pressure_floors += long(low_pressure);
         rho[c] = r;
         if constexpr (!Eos::isothermal) {
-          const double p =
-              pressure_from_conserved(r, u.mx[c], u.my[c], u.mz[c], en[c], u.field_sq(c), eos);
-          const bool low_pressure = p < pressure_floor;
-          np += long(low_pressure);
-          en[c] += low_pressure ? (pressure_floor - p) / (eos.gamma - 1.0) : 0.0;
+          if (low_pressure) en[c] += (pressure_floor - p) / (eos.gamma - 1.0);
         }
       }
-      density_floors += nd;
-      pressure_floors += np;
     }
   }
 }

@@ -5,7 +5,8 @@
 
 namespace brume::solver {
 
-// The first cell found with a non-finite value after a stage (in k, j, i order of the block).
+// A cell singled out after a stage (the first in k, j, i order of the block): the first with a
+// non-finite value, or the first a floor acted on (its values before the floor).
 struct NumericalFailure {
   bool occurred = false;
   long step = 0;               // state.step at the start of the failed step
@@ -21,6 +22,7 @@ struct StepReport {
   long pressure_floors = 0;  // cell-stages where the pressure floor was applied
   long fallback_cells = 0;   // cell-stages recomputed with first-order fluxes
   NumericalFailure failure;
+  NumericalFailure first_floored;  // the first cell-stage a floor acted on in this step
   [[nodiscard]] bool ok() const { return !failure.occurred; }
 };
 

@@ -101,7 +101,12 @@ class Vl2Integrator final : public Integrator {
     }
     if (ghosts_->any_block(failure.occurred)) return false;
     apply_floors<Eos, Magnetic>(target, options_.density_floor, options_.pressure_floor, eos_,
-                                report.density_floors, report.pressure_floors);
+                                report.density_floors, report.pressure_floors,
+                                report.first_floored);
+    if (report.first_floored.occurred && report.first_floored.stage == 0) {
+      report.first_floored.step = base.step;
+      report.first_floored.stage = index;
+    }
     return true;
   }
 

@@ -174,7 +174,13 @@ Section scheme() {
            quantity_key("pressure_floor", dim::pressure, "K cm^-3",
                         "Smallest thermal pressure, as P/k_B (counted when applied).")
                .with_default("1e-6 K cm^-3")
-               .above(0)},
+               .above(0),
+           real_key("floor_limit",
+                    "Largest fraction of the box's cells the floors may act on in one step "
+                    "(both floors, both stages, summed); beyond it the run stops as failed.")
+               .with_default("0.01")
+               .above(0)
+               .at_most(1)},
           {solver_fits_the_gas},
           std::nullopt};
 }

@@ -49,3 +49,31 @@ TEST(Run, WritesConfigurationLogSummaryAndScheduledSnapshots) {
   EXPECT_EQ(status, 0) << printed.str();
   fs::remove_all(folder);
 }
+
+// A run whose floors act on more cells than scheme.floor_limit allows stops as failed: exit code 3
+// (docs/command-line.md), a one-line reason with the step, the time, the cell and its values, and a
+// diagnostic snapshot of the failed step beside the earlier snapshots. The β = 0.02 blast wave
+// floors the pressure in a few cells within its first steps (docs/validation.md); a limit of 1e-9
+// of the cells is exceeded by the first floored cell. Common practice, no source.
+TEST(Run, ExhaustedFloorsStopTheRunWithExitCodeThreeAndADiagnosticSnapshot) {
+  const fs::path folder = fresh_folder("brume-floors");
+  const fs::path out = folder / "blast";
+  const auto r = run_brume("run '" + std::string(BRUME_SOURCE_DIR) +
+                           "/problems/blast_wave.yaml' --set scheme.floor_limit=1e-9 --out '" +
+                           out.string() + "'");
+  EXPECT_EQ(r.exit_code, 3) << r.err;
+  std::ifstream summary(out / "summary.txt");
+  std::stringstream text;
+  text << summary.rdbuf();
+  EXPECT_NE(text.str().find("floors acted on too many cells"), std::string::npos) << text.str();
+  EXPECT_NE(text.str().find("scheme.floor_limit = 1e-09"), std::string::npos) << text.str();
+  EXPECT_NE(text.str().find("first floored at step"), std::string::npos) << text.str();
+  EXPECT_NE(text.str().find("cell ("), std::string::npos) << text.str();
+  EXPECT_TRUE(fs::exists(out / "snapshot-0000.h5"));
+  bool failure_snapshot = false;
+  for (const auto& entry : fs::directory_iterator(out))
+    failure_snapshot |= entry.path().filename().string().rfind("failure-step", 0) == 0;
+  EXPECT_TRUE(failure_snapshot);
+  EXPECT_NE(r.err.find("diagnostic snapshot"), std::string::npos) << r.err;
+  fs::remove_all(folder);
+}

@@ -21,7 +21,7 @@ TEST(ConfigCoreSections, SectionsAndKeys) {
       {"units", {"length", "velocity", "number_density"}},
       {"scheme",
        {"reconstruction", "limiter", "ppm_limiter", "characteristic_limiting", "riemann_solver",
-        "courant", "density_floor", "pressure_floor"}},
+        "courant", "density_floor", "pressure_floor", "floor_limit"}},
       {"clock", {"stop_time", "max_steps", "wall_budget"}},
       {"output", {"folder", "snapshot_interval", "progress_interval", "precision"}},
       {"problem", {"name"}}};

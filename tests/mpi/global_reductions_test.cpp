@@ -60,5 +60,29 @@ TEST(MpiGlobalReductions, StepReportsAreSummedAndTheFirstFailureWins) {
   EXPECT_FALSE(solver::combine_step_reports(local, box, MPI_COMM_WORLD).failure.occurred);
 }
 
+TEST(MpiGlobalReductions, TheFirstFlooredCellIsTheOneASingleBlockFindsFirst) {
+  const int rank = world_rank(), size = world_size();
+  const std::array<long, 3> box{8, 8, 8};
+  solver::StepReport local;
+  // Ranks above 0 floor a cell in stage 2, lower in y the higher the rank; rank 0 floors none.
+  if (rank > 0) {
+    local.pressure_floors = 1;
+    local.first_floored.occurred = true;
+    local.first_floored.stage = 2;
+    local.first_floored.cell = {0, 8 - rank, 0};
+    local.first_floored.energy = double(rank);
+  }
+  const solver::StepReport global = solver::combine_step_reports(local, box, MPI_COMM_WORLD);
+  EXPECT_EQ(global.pressure_floors, size - 1);
+  EXPECT_TRUE(global.ok()) << "a floored cell is not a failure";
+  if (size == 1) {
+    EXPECT_FALSE(global.first_floored.occurred);
+    return;
+  }
+  ASSERT_TRUE(global.first_floored.occurred);
+  EXPECT_EQ(global.first_floored.cell, (std::array<long, 3>{0, 8 - (size - 1), 0}));
+  EXPECT_EQ(global.first_floored.energy, double(size - 1));
+}
+
 }  // namespace
 }  // namespace brume::mpi_testing

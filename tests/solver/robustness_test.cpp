@@ -83,6 +83,40 @@ TEST(Robustness, NearVacuumIsRepairedAndCounted) {
   }
 }
 
+// A cell below the pressure floor in a uniform, resting gas: the floor acts in stage 1 on that
+// cell alone, and the report names it (global index) with its values before the floor.
+TEST(Robustness, TheFirstFlooredCellIsReportedWithItsValuesBeforeTheFloor) {
+  SchemeOptions o;
+  o.magnetic = false;
+  o.pressure_floor = 1e-3;
+  BlockGeometry g = whole_box_geometry({8, 4, 1}, {0, 0, 0}, {1, 1, 1}, 3);
+  g.offset = {16, 4, 0};
+  State s = make_state(g, false, false);
+  set_primitive(
+      s,
+      [](double, double, double) {
+        return Primitive{1, 0, 0, 0, 1};
+      },
+      o.gamma);
+  const std::ptrdiff_t low = g.index(6, 3, 0);
+  s.energy[low] = 1e-6 / (o.gamma - 1.0);  // p = 1e-6, below the floor
+  s.step = 7;
+  auto integrator = make_integrator(o, g, periodic_box());
+  const double energy_before = s.energy[low];
+  const StepReport r = integrator->advance(s, 1e-4);
+  ASSERT_TRUE(r.ok());
+  EXPECT_GE(r.pressure_floors, 1);
+  EXPECT_EQ(r.density_floors, 0);
+  ASSERT_TRUE(r.first_floored.occurred);
+  EXPECT_EQ(r.first_floored.step, 7);
+  EXPECT_EQ(r.first_floored.stage, 1);
+  EXPECT_EQ(r.first_floored.cell, (std::array<long, 3>{22, 7, 0}));
+  EXPECT_EQ(r.first_floored.density, 1.0) << "the predictor leaves a resting uniform density";
+  // The predictor has raised the cell's energy a little from its neighbours, not above the floor.
+  EXPECT_GT(r.first_floored.energy, energy_before);
+  EXPECT_LT(r.first_floored.energy, o.pressure_floor / (o.gamma - 1.0));
+}
+
 TEST(Robustness, ImpossibleOptionsAreRejected) {
   const BlockGeometry g = whole_box_geometry({8, 1, 1}, {0, 0, 0}, {1, 1, 1}, 2);
   SchemeOptions o;
