@@ -17,6 +17,8 @@ const std::vector<SubcommandInfo>& subcommands() {
       {"problems", "", "list the initial conditions brume can set up"},
       {"bench", "[--json] [--cells N] [--steps N]",
        "measure cell-updates per second per core and bytes per cell of the main schemes"},
+      {"inspect", "FILE [--json] [--configuration]",
+       "describe a snapshot (fields, units, provenance) and check that it is sound"},
   };
   return list;
 }
@@ -85,6 +87,8 @@ CommandLine parse_command_line(const std::vector<std::string>& words) {
       line.out = option_value(words, i, "--out");
     } else if (word == "--json") {
       line.json = true;
+    } else if (word == "--configuration") {
+      line.configuration = true;
     } else if (starts_with_option(word, "--cells")) {
       line.cells = option_value(words, i, "--cells");
     } else if (starts_with_option(word, "--steps")) {

@@ -17,7 +17,8 @@ struct CommandLine {
   bool help = false;
   bool version = false;
   bool markdown = false;             // --markdown (keys)
-  bool json = false;                 // --json (bench)
+  bool json = false;                 // --json (bench, inspect)
+  bool configuration = false;        // --configuration (inspect)
   std::optional<std::string> cells;  // --cells N (bench)
   std::optional<std::string> steps;  // --steps N (bench)
   io::Verbosity verbosity = io::Verbosity::normal;

@@ -27,6 +27,8 @@ std::string help_text() {
       "  --set SECTION.KEY=VALUE  override one configuration key (repeatable); the value is\n"
       "                           validated like the file, units allowed: --set box.size=20pc\n"
       "  --out DIR                run folder for `run` (default: output.folder, else runs/NAME)\n"
+      "  --json                   machine-readable output for `bench` and `inspect`\n"
+      "  --configuration          `inspect`: also print the resolved configuration in the file\n"
       "  --quiet, -q              only warnings and errors\n"
       "  --verbose, -v            more detail\n"
       "  --help, -h               this text\n"

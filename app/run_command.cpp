@@ -76,6 +76,8 @@ io::SnapshotInfo snapshot_info(const config::ResolvedConfig& config, const RunSe
                 u.pressure(), u.magnetic_field()};
   info.configuration = config.to_yaml(false);
   info.single_precision = config.text("output.precision") == "float32";
+  if (config.text("output.compression") == "deflate")
+    info.deflate_level = static_cast<int>(config.integer("output.compression_level"));
   return info;
 }
 

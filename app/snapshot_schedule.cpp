@@ -3,7 +3,11 @@
 #include <cmath>
 #include <cstdio>
 #include <limits>
+#include <stdexcept>
 #include <utility>
+
+#include "io/atomic_file.hpp"
+#include "io/first_failure.hpp"
 
 namespace brume::app {
 
@@ -21,10 +25,32 @@ double SnapshotSchedule::next_time() const {
 }
 
 void SnapshotSchedule::write_file(const std::filesystem::path& file, const solver::State& state,
-                                  const std::string& reason) {
+                                  const std::string& reason, bool in_series) {
   info_.reason = reason;
   io::write_snapshot(file, state, info_, comm_);
-  log_.detail("brume: wrote " + file.string());
+  const io::XdmfSnapshot snapshot = io::xdmf_snapshot(file.filename().string(), state, info_);
+  if (in_series) series_.push_back(snapshot);
+  write_xdmf(file, snapshot, in_series);
+  log_.detail("brume: wrote " + file.string() + " and " + io::sidecar_path(file).string());
+}
+
+void SnapshotSchedule::write_xdmf(const std::filesystem::path& file,
+                                  const io::XdmfSnapshot& snapshot, bool in_series) const {
+  int rank = 0;
+  MPI_Comm_rank(comm_, &rank);
+  std::string failure;
+  if (rank == 0) {
+    try {
+      io::write_file_atomically(io::sidecar_path(file), io::snapshot_xdmf(snapshot));
+      if (in_series) {
+        io::write_file_atomically(folder_ / io::time_series_file, io::time_series_xdmf(series_));
+      }
+    } catch (const std::runtime_error& error) {
+      failure = error.what();
+    }
+  }
+  const std::string agreed = io::first_failure(comm_, failure);
+  if (!agreed.empty()) throw std::runtime_error(agreed);
 }
 
 void SnapshotSchedule::write(const solver::State& state, const std::string& reason) {
@@ -32,12 +58,12 @@ void SnapshotSchedule::write(const solver::State& state, const std::string& reas
   last_step_ = state.step;
   char name[32];
   std::snprintf(name, sizeof name, "snapshot-%04d.h5", count_++);
-  write_file(folder_ / name, state, reason);
+  write_file(folder_ / name, state, reason, true);
 }
 
 void SnapshotSchedule::write_failure(const solver::State& state) {
   const auto file = folder_ / ("failure-step" + std::to_string(state.step) + ".h5");
-  write_file(file, state, "numerical failure");
+  write_file(file, state, "numerical failure", false);
   log_.warning("diagnostic snapshot of the failed step: " + file.string());
 }
 

@@ -1,14 +1,17 @@
 // When and where a run writes its snapshots: the initial state, one every output.snapshot_interval
-// of simulated time, the final state, and a diagnostic snapshot when the step fails.
+// of simulated time, the final state, and a diagnostic snapshot when the step fails. Each file has
+// an XDMF sidecar, and the numbered snapshots form the run's XDMF time series (io/xdmf.hpp).
 #pragma once
 
 #include <mpi.h>
 
 #include <filesystem>
 #include <string>
+#include <vector>
 
 #include "io/log.hpp"
 #include "io/snapshot.hpp"
+#include "io/xdmf.hpp"
 #include "solver/state.hpp"
 
 namespace brume::app {
@@ -20,9 +23,10 @@ class SnapshotSchedule {
                    MPI_Comm comm, const io::Log& log);
 
   // Writes snapshot-NNNN.h5 (the next number) with the given reason, unless this step was written
-  // already. Collective.
+  // already, its sidecar snapshot-NNNN.xmf and the time series snapshots.xmf. Collective.
   void write(const solver::State& state, const std::string& reason);
-  // Writes failure-stepN.h5: the state as the failed step left it. Collective.
+  // Writes failure-stepN.h5: the state as the failed step left it, and its sidecar (it is not
+  // part of the time series). Collective.
   void write_failure(const solver::State& state);
 
   // Simulated time of the next scheduled snapshot (+inf when none is scheduled).
@@ -32,7 +36,10 @@ class SnapshotSchedule {
 
  private:
   void write_file(const std::filesystem::path& file, const solver::State& state,
-                  const std::string& reason);
+                  const std::string& reason, bool in_series);
+  // Rank 0 writes the XDMF files; a failure there stops every rank.
+  void write_xdmf(const std::filesystem::path& file, const io::XdmfSnapshot& snapshot,
+                  bool in_series) const;
 
   std::filesystem::path folder_;
   io::SnapshotInfo info_;
@@ -40,6 +47,7 @@ class SnapshotSchedule {
   double next_;
   int count_ = 0;
   long last_step_ = -1;
+  std::vector<io::XdmfSnapshot> series_;
   MPI_Comm comm_;
   const io::Log& log_;
 };

@@ -7,63 +7,55 @@
 #include <stdexcept>
 #include <vector>
 
+#include "io/block_selection.hpp"
+#include "io/chunk_shape.hpp"
 #include "io/hdf5_handles.hpp"
 #include "io/provenance.hpp"
+#include "io/snapshot_layout.hpp"
 
 namespace brume::io {
 
 namespace {
 
-// The part of a block's storage array that it writes, and where that lands in the global dataset.
-struct Selection {
-  hsize_t memory_extent[3];  // storage extents, [z][y][x]
-  hsize_t memory_start[3];
-  hsize_t count[3];
-  hsize_t file_extent[3];
-  hsize_t file_start[3];
-};
-
-// `staggered_axis` is the normal of a face array (−1 for cell data). A block writes its interior
-// cells, and for a face array the faces at its lower side along the normal; the block at the upper
-// end of the box writes the last face too, so that each face is written by exactly one rank.
-Selection selection(const solver::BlockGeometry& g, const std::array<long, 3>& global,
-                    int staggered_axis) {
-  Selection s{};
-  for (int d = 0; d < 3; ++d) {
-    const int z = 2 - d;  // HDF5 order: slowest first
-    const bool face = d == staggered_axis && g.active(d);
-    const bool last = g.offset[d] + g.cells[d] == global[d];
-    s.memory_extent[z] = static_cast<hsize_t>(g.extent(d));
-    s.memory_start[z] = static_cast<hsize_t>(g.ghosts(d));
-    s.count[z] = static_cast<hsize_t>(g.cells[d] + (face && last ? 1 : 0));
-    s.file_extent[z] = static_cast<hsize_t>(global[d] + (face ? 1 : 0));
-    s.file_start[z] = static_cast<hsize_t>(g.offset[d]);
+// Contiguous layout, or chunked with byte shuffle and deflate (the shuffle groups the bytes of
+// equal significance, which deflate then compresses far better for floating-point data) and a
+// Fletcher-32 checksum per chunk, so that a damaged chunk fails to read instead of reading wrong.
+H5Handle creation_list(const std::array<hsize_t, 3>& shape, int deflate_level) {
+  H5Handle list(checked(H5Pcreate(H5P_DATASET_CREATE), "dataset creation list"), H5Pclose);
+  if (deflate_level > 0) {
+    const std::array<hsize_t, 3> chunk = chunk_shape(shape);
+    checked_status(H5Pset_chunk(list.get(), 3, chunk.data()), "chunk shape");
+    checked_status(H5Pset_shuffle(list.get()), "shuffle filter");
+    checked_status(H5Pset_deflate(list.get(), static_cast<unsigned>(deflate_level)),
+                   "deflate filter");
+    checked_status(H5Pset_fletcher32(list.get()), "checksum filter");
+    // Every element is written: filling chunks first would only cost time.
+    checked_status(H5Pset_fill_time(list.get(), H5D_FILL_TIME_NEVER), "fill time");
   }
-  return s;
+  return list;
 }
 
-void write_dataset(hid_t group, const std::string& name, const double* data, const Selection& s,
-                   bool single_precision, const std::string& unit, double to_cgs, hid_t transfer) {
-  H5Handle file_space(checked(H5Screate_simple(3, s.file_extent, nullptr), "file dataspace"),
+void write_dataset(hid_t group, const SnapshotField& field, const solver::State& state,
+                   const SnapshotInfo& info, hid_t transfer) {
+  const BlockSelection s =
+      block_selection(state.geometry, info.global_cells, field.staggered_axis(), FaceRange::owned);
+  H5Handle file_space(checked(H5Screate_simple(3, s.file_extent.data(), nullptr), "file dataspace"),
                       H5Sclose);
-  H5Handle dataset(
-      checked(H5Dcreate2(group, name.c_str(), single_precision ? H5T_IEEE_F32LE : H5T_IEEE_F64LE,
-                         file_space.get(), H5P_DEFAULT, H5P_DEFAULT, H5P_DEFAULT),
-              "creating dataset " + name),
-      H5Dclose);
-  H5Handle memory_space(checked(H5Screate_simple(3, s.memory_extent, nullptr), "memory dataspace"),
-                        H5Sclose);
-  checked_status(H5Sselect_hyperslab(memory_space.get(), H5S_SELECT_SET, s.memory_start, nullptr,
-                                     s.count, nullptr),
-                 "memory selection of " + name);
-  checked_status(H5Sselect_hyperslab(file_space.get(), H5S_SELECT_SET, s.file_start, nullptr,
-                                     s.count, nullptr),
-                 "file selection of " + name);
+  const H5Handle creation = creation_list(s.file_extent, info.deflate_level);
+  const std::string& name = field.name;
+  H5Handle dataset(checked(H5Dcreate2(group, name.c_str(),
+                                      info.single_precision ? H5T_IEEE_F32LE : H5T_IEEE_F64LE,
+                                      file_space.get(), H5P_DEFAULT, creation.get(), H5P_DEFAULT),
+                           "creating dataset " + name),
+                   H5Dclose);
+  H5Handle memory_space(
+      checked(H5Screate_simple(3, s.memory_extent.data(), nullptr), "memory dataspace"), H5Sclose);
+  select_block(memory_space.get(), file_space.get(), s, name);
   checked_status(H5Dwrite(dataset.get(), H5T_NATIVE_DOUBLE, memory_space.get(), file_space.get(),
-                          transfer, data),
+                          transfer, field_storage(state, field).data()),
                  "writing dataset " + name);
-  write_attribute(dataset.get(), "unit", unit);
-  write_attribute(dataset.get(), "to_cgs", to_cgs);
+  write_attribute(dataset.get(), "unit", field.unit);
+  write_attribute(dataset.get(), "to_cgs", info.units.*field.to_cgs);
 }
 
 void write_file(const std::string& path, const solver::State& state, const SnapshotInfo& info,
@@ -77,7 +69,7 @@ void write_file(const std::string& path, const solver::State& state, const Snaps
   checked_status(H5Pset_dxpl_mpio(transfer.get(), H5FD_MPIO_COLLECTIVE), "collective transfer");
 
   const hid_t root = file.get();
-  write_attribute(root, "format", std::string("brume snapshot 1"));
+  write_attribute(root, "format", std::string(snapshot_format));
   write_attribute(root, "time", state.time);
   write_attribute(root, "time_to_cgs", info.units.time);
   write_attribute(root, "step", static_cast<long long>(state.step));
@@ -98,28 +90,8 @@ void write_file(const std::string& path, const solver::State& state, const Snaps
   H5Handle fields(
       checked(H5Gcreate2(root, "fields", H5P_DEFAULT, H5P_DEFAULT, H5P_DEFAULT), "group fields"),
       H5Gclose);
-  const solver::BlockGeometry& g = state.geometry;
-  const Selection cell = selection(g, info.global_cells, -1);
-  const bool f32 = info.single_precision;
-  const FieldUnits& u = info.units;
-  write_dataset(fields.get(), "density", state.density.data(), cell, f32, "g cm^-3", u.density,
-                transfer.get());
-  const char* momenta[3] = {"momentum_x", "momentum_y", "momentum_z"};
-  for (int d = 0; d < 3; ++d) {
-    write_dataset(fields.get(), momenta[d], state.momentum[d].data(), cell, f32, "g cm^-2 s^-1",
-                  u.momentum, transfer.get());
-  }
-  if (!state.isothermal) {
-    write_dataset(fields.get(), "total_energy", state.energy.data(), cell, f32, "erg cm^-3",
-                  u.energy_density, transfer.get());
-  }
-  if (state.magnetic) {
-    const char* faces[3] = {"face_field_x", "face_field_y", "face_field_z"};
-    for (int d = 0; d < 3; ++d) {
-      write_dataset(fields.get(), faces[d], state.face_field[d].data(),
-                    selection(g, info.global_cells, d), f32, "G", u.magnetic_field, transfer.get());
-    }
-  }
+  for (const SnapshotField& field : snapshot_fields(state.magnetic, state.isothermal))
+    write_dataset(fields.get(), field, state, info, transfer.get());
   fields.close();
   if (!file.close()) throw std::runtime_error("HDF5: closing " + path + " failed");
 }

@@ -1,7 +1,7 @@
 // One HDF5 file per snapshot: every field one dataset in the global layout of the box (x fastest,
 // i.e. dimensions [z][y][x]), written collectively by all ranks; units as attributes (the factor to
 // cgs), the resolved configuration and the build provenance in every file. The file is written
-// under a temporary name and renamed when complete.
+// under a temporary name and renamed when complete. The datasets are listed in snapshot_layout.hpp.
 #pragma once
 
 #include <mpi.h>
@@ -10,19 +10,10 @@
 #include <filesystem>
 #include <string>
 
+#include "io/field_units.hpp"
 #include "solver/state.hpp"
 
 namespace brume::io {
-
-// Factor that turns each code quantity into cgs.
-struct FieldUnits {
-  double length = 1.0;          // cm
-  double time = 1.0;            // s
-  double density = 1.0;         // g cm^-3
-  double momentum = 1.0;        // g cm^-2 s^-1
-  double energy_density = 1.0;  // erg cm^-3
-  double magnetic_field = 1.0;  // G (code B includes 1/sqrt(4π): B_G = B_code × this)
-};
 
 struct SnapshotInfo {
   std::array<long, 3> global_cells{};
@@ -32,6 +23,9 @@ struct SnapshotInfo {
   std::string configuration;  // resolved configuration (YAML)
   std::string reason;         // "scheduled", "final", "numerical failure", ...
   bool single_precision = false;
+  // 0: contiguous datasets; 1–9: chunked (io/chunk_shape.hpp), byte-shuffled and deflated at this
+  // zlib level, with a Fletcher-32 checksum per chunk.
+  int deflate_level = 0;
 };
 
 // Collective over `comm`: every rank passes its own block. Throws std::runtime_error on failure

@@ -216,7 +216,17 @@ Section output() {
            .at_least(0),
        choice_key("precision", {{"float64", "Double precision."}, {"float32", "Single precision."}},
                   "Floating-point precision of snapshot fields.")
-           .with_default("float64")},
+           .with_default("float64"),
+       choice_key("compression",
+                  {{"none", "Contiguous datasets, written as they are."},
+                   {"deflate", "Chunked datasets, byte-shuffled and deflated (zlib), lossless."}},
+                  "Compression of snapshot fields.")
+           .with_default("none"),
+       integer_key("compression_level",
+                   "Deflate level when output.compression is deflate: 1 fastest, 9 smallest.")
+           .with_default("4")
+           .at_least(1)
+           .at_most(9)},
       {},
       std::nullopt};
 }

@@ -32,3 +32,14 @@ TEST(CommandLine, HelpAndVersionNeedNoCommand) {
   EXPECT_TRUE(parse_command_line({"--version"}).version);
   EXPECT_TRUE(parse_command_line({}).command.empty());
 }
+
+TEST(CommandLine, InspectTakesAFileAndItsFlags) {
+  const auto line =
+      parse_command_line({"inspect", "snapshot-0001.h5", "--json", "--configuration"});
+  EXPECT_EQ(line.command, "inspect");
+  ASSERT_EQ(line.positional.size(), 1u);
+  EXPECT_EQ(line.positional[0], "snapshot-0001.h5");
+  EXPECT_TRUE(line.json);
+  EXPECT_TRUE(line.configuration);
+  EXPECT_FALSE(parse_command_line({"inspect", "a.h5"}).configuration);
+}

@@ -1,5 +1,6 @@
 // `brume run` end to end on a tiny box: the run folder holds the resolved configuration, the log,
-// the summary and the snapshots on their schedule; the snapshots read back with h5py.
+// the summary and the snapshots on their schedule; the snapshots read back with h5py, and their
+// XDMF sidecars and time series describe them (tests/io/check_xdmf.py).
 #include <gtest/gtest.h>
 
 #include <filesystem>
@@ -7,6 +8,7 @@
 #include <sstream>
 
 #include "tests/cli/run_brume.hpp"
+#include "tests/support/run_python.hpp"
 
 namespace fs = std::filesystem;
 using brume::testing::fresh_folder;
@@ -75,5 +77,25 @@ TEST(Run, ExhaustedFloorsStopTheRunWithExitCodeThreeAndADiagnosticSnapshot) {
     failure_snapshot |= entry.path().filename().string().rfind("failure-step", 0) == 0;
   EXPECT_TRUE(failure_snapshot);
   EXPECT_NE(r.err.find("diagnostic snapshot"), std::string::npos) << r.err;
+  fs::remove_all(folder);
+}
+
+TEST(Run, SnapshotsHaveXdmfSidecarsAndATimeSeries) {
+  const fs::path folder = fresh_folder("brume-run-xdmf");
+  const fs::path out = folder / "box";
+  const auto r = run_brume("run '" + std::string(BRUME_SOURCE_DIR) +
+                           "/problems/demo.yaml' --set box.cells=8 --set clock.stop_time=0.2Myr "
+                           "--set output.snapshot_interval=0.1Myr --set output.compression=deflate "
+                           "-q --out '" +
+                           out.string() + "'");
+  ASSERT_EQ(r.exit_code, 0) << r.err;
+  for (const char* name :
+       {"snapshot-0000.xmf", "snapshot-0001.xmf", "snapshot-0002.xmf", "snapshots.xmf"}) {
+    EXPECT_TRUE(fs::exists(out / name)) << name;
+  }
+  // Parsed with xml.etree; every dataset path opened with h5py with its dimensions and precision.
+  const auto check = brume::testing::run_python(
+      brume::testing::source_script("tests/io/check_xdmf.py"), {out.string()});
+  EXPECT_EQ(check.exit_code, 0) << check.output;
   fs::remove_all(folder);
 }

@@ -23,7 +23,9 @@ TEST(ConfigCoreSections, SectionsAndKeys) {
        {"reconstruction", "limiter", "ppm_limiter", "characteristic_limiting", "riemann_solver",
         "courant", "density_floor", "pressure_floor", "floor_limit"}},
       {"clock", {"stop_time", "max_steps", "wall_budget"}},
-      {"output", {"folder", "snapshot_interval", "progress_interval", "precision"}},
+      {"output",
+       {"folder", "snapshot_interval", "progress_interval", "precision", "compression",
+        "compression_level"}},
       {"problem", {"name"}}};
   const std::vector<Section> sections = core_sections({{"only", "The only problem."}});
   ASSERT_EQ(sections.size(), expected.size());

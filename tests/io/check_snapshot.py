@@ -1,11 +1,15 @@
 """Reads a snapshot written by tests/io/snapshot_test.cpp with h5py (Debian's python3-h5py, the
-reference reader) and checks shapes, values and unit attributes. Exit code 0 when all hold."""
+reference reader) and checks shapes, values and unit attributes:
+    check_snapshot.py FILE NX NY NZ [DEFLATE_LEVEL]
+With a level every dataset must be chunked, shuffled, deflated (h5py calls it gzip) at that level
+and checksummed (Fletcher-32); without, contiguous and unfiltered. Exit code 0 when all hold."""
 import sys
 
 import h5py
 import numpy as np
 
 path, nx, ny, nz = sys.argv[1], int(sys.argv[2]), int(sys.argv[3]), int(sys.argv[4])
+level = int(sys.argv[5]) if len(sys.argv) > 5 else None
 failures = []
 
 
@@ -36,6 +40,14 @@ with h5py.File(path, "r") as f:
     expect(f["fields/face_field_z"].shape == (nz + 1, ny, nx), "face_field_z shape")
     expect(f["fields/momentum_y"].attrs["unit"] in (b"g cm^-2 s^-1", "g cm^-2 s^-1"),
            "momentum unit")
+    for name, d in f["fields"].items():
+        if level is None:
+            expect(d.chunks is None and d.compression is None, name + " contiguous")
+        else:
+            expect(d.chunks is not None and d.compression == "gzip" and
+                   d.compression_opts == level and d.shuffle and d.fletcher32,
+                   f"{name} chunked {d.chunks}, {d.compression} {d.compression_opts}, "
+                   f"shuffle {d.shuffle}, fletcher32 {d.fletcher32}")
 
 if failures:
     print("snapshot check failed: " + "; ".join(failures))

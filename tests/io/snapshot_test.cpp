@@ -11,18 +11,6 @@ namespace fs = std::filesystem;
 
 namespace {
 
-// MPI for this test executable (snapshots are written through MPI-IO even on one rank).
-class MpiEnvironment : public ::testing::Environment {
- public:
-  void SetUp() override {
-    int ready = 0;
-    MPI_Initialized(&ready);
-    if (!ready) MPI_Init(nullptr, nullptr);
-  }
-  void TearDown() override { MPI_Finalize(); }
-};
-const auto* const mpi = ::testing::AddGlobalTestEnvironment(new MpiEnvironment);
-
 brume::solver::State known_state(int nx, int ny, int nz) {
   const auto g = brume::solver::whole_box_geometry({nx, ny, nz}, {0, 0, 0}, {1, 1, 1}, 2);
   auto s = brume::solver::make_state(g, true, false);
@@ -41,9 +29,9 @@ brume::solver::State known_state(int nx, int ny, int nz) {
   return s;
 }
 
-}  // namespace
-
-TEST(Snapshot, ReadBackWithH5pyHasShapesValuesAndUnits) {
+// Writes the known state of a 6 × 5 × 4 box and checks it with h5py (Debian python3-h5py, the
+// reference reader); `deflate_level` 0 writes contiguous datasets.
+void write_and_check(int deflate_level) {
   const int nx = 6, ny = 5, nz = 4;
   const auto state = known_state(nx, ny, nz);
   brume::io::SnapshotInfo info;
@@ -56,20 +44,31 @@ TEST(Snapshot, ReadBackWithH5pyHasShapesValuesAndUnits) {
   fs::remove_all(folder);
   fs::create_directories(folder);
   const fs::path file = folder / "fields.h5";
+  info.deflate_level = deflate_level;
   brume::io::write_snapshot(file, state, info, MPI_COMM_WORLD);
   ASSERT_TRUE(fs::exists(file));
   EXPECT_EQ(std::distance(fs::directory_iterator(folder), fs::directory_iterator{}), 1)
       << "no temporary file is left behind";
-  // h5py (Debian python3-h5py) is the reference reader.
   const std::string command =
       std::string(BRUME_PYTHON) + " '" + BRUME_SOURCE_DIR + "/tests/io/check_snapshot.py' '" +
       file.string() + "' " + std::to_string(nx) + " " + std::to_string(ny) + " " +
-      std::to_string(nz) + " > '" + (folder / "check.txt").string() + "' 2>&1";
+      std::to_string(nz) + (deflate_level > 0 ? " " + std::to_string(deflate_level) : "") + " > '" +
+      (folder / "check.txt").string() + "' 2>&1";
   const int status = std::system(command.c_str());
   std::ifstream report(folder / "check.txt");
   const std::string text((std::istreambuf_iterator<char>(report)), {});
   EXPECT_EQ(status, 0) << text;
   fs::remove_all(folder);
+}
+
+}  // namespace
+
+TEST(Snapshot, ReadBackWithH5pyHasShapesValuesAndUnits) {
+  write_and_check(0);
+}
+
+TEST(Snapshot, DeflateOnRequestIsLosslessChunkedAndChecksummed) {
+  write_and_check(3);
 }
 
 TEST(Snapshot, FailureToCreateIsReportedAndLeavesNoFile) {
