@@ -158,6 +158,15 @@ TEST(ToroNearVacuum, StarStateOfTest2ConvergesAtFirstOrder) {
   const reference::ExactRiemann exact = exact_solution("toro2");
   const auto& star = exact.star();
   const auto [left_edge, right_edge] = star_region(exact);
+  // Why 400 cells cannot hold the plateau to 1 %: the gas in the exact star region at t = 0.15,
+  // ρ* (right − left edge) t, is less than the mass of one initial cell (ρ = 1, Δx = 1/400) — the
+  // whole plateau is made of the half cells beside the initial jump, the cells the scheme's
+  // start-up dissipation heats (a mass argument, common practice, no source). Its entropy
+  // p/ρ^γ, 0.4 in the exact isentropic solution, is measured and printed below.
+  const double plateau_mass = star.density_left * (right_edge - left_edge) * 0.15;
+  EXPECT_LT(plateau_mass / (1.0 / 400.0), 1.0);
+  std::printf("toro2 exact plateau mass %.4g = %.3f initial cells at 400 cells\n", plateau_mass,
+              plateau_mass * 400.0);
   std::array<double, 4> p_error{}, rho_error{};
   for (int r = 0; r < 4; ++r) {
     const int n = 400 << r;
@@ -165,18 +174,21 @@ TEST(ToroNearVacuum, StarStateOfTest2ConvergesAtFirstOrder) {
     ASSERT_FALSE(run.failed) << n;
     const Profile p = profile(run);
     const double margin = 6 * run.state.geometry.spacing[0], t = run.stop_time;
-    Plateau rho, pr;
+    Plateau rho, pr, entropy;
     for (std::size_t i = 0; i < p.size(); ++i) {
       if (p.x[i] < run.interface + left_edge * t + margin) continue;
       if (p.x[i] > run.interface + right_edge * t - margin) continue;
       pr.add(p.pressure[i] / star.pressure - 1.0);
       rho.add(p.density[i] / star.density_left - 1.0);
+      entropy.add(p.pressure[i] / std::pow(p.density[i], exact.gamma()) / 0.4 - 1.0);
     }
     ASSERT_GE(pr.count, 10) << n;
     p_error[std::size_t(r)] = std::fabs(pr.mean());
     rho_error[std::size_t(r)] = std::fabs(rho.mean());
-    std::printf("toro2 n=%d plateau %d cells: mean rel. error rho %.4f p %.4f\n", n, pr.count,
-                rho_error[std::size_t(r)], p_error[std::size_t(r)]);
+    std::printf("toro2 n=%d plateau %d cells: mean rel. error rho %.4f p %.4f, entropy %+.4f\n", n,
+                pr.count, rho_error[std::size_t(r)], p_error[std::size_t(r)], entropy.mean());
+    // The plateau's gas was heated (entropy raised) at start-up, and the excess falls with Δx.
+    EXPECT_GT(entropy.mean(), 0.0) << n;
   }
   for (std::size_t r = 1; r < 4; ++r)
     EXPECT_GT(p_error[r - 1] / p_error[r], 1.6) << r;
