@@ -9,7 +9,8 @@ namespace brume::app {
 
 const std::vector<SubcommandInfo>& subcommands() {
   static const std::vector<SubcommandInfo> list = {
-      {"run", "CONFIG [--set KEY=VALUE]... [--out DIR]", "run a simulation"},
+      {"run", "CONFIG [--set KEY=VALUE]... [--out DIR] | --restart CHECKPOINT|RUN_FOLDER",
+       "run a simulation, or continue one from a checkpoint"},
       {"check", "CONFIG [--set KEY=VALUE]...",
        "validate a configuration; print it resolved, with derived quantities"},
       {"keys", "[SECTION] [--markdown]",
@@ -39,9 +40,10 @@ std::string option_value(const std::vector<std::string>& words, std::size_t& i,
   }
   if (i + 1 >= words.size()) {
     throw UserError("command line: " + option + " needs a value (" +
-                    (option == "--set"   ? "--set SECTION.KEY=VALUE"
-                     : option == "--out" ? option + " DIR"
-                                         : option + " N") +
+                    (option == "--set"       ? "--set SECTION.KEY=VALUE"
+                     : option == "--out"     ? option + " DIR"
+                     : option == "--restart" ? option + " CHECKPOINT|RUN_FOLDER"
+                                             : option + " N") +
                     ")");
   }
   return words[++i];
@@ -85,6 +87,8 @@ CommandLine parse_command_line(const std::vector<std::string>& words) {
       line.overrides.push_back(option_value(words, i, "--set"));
     } else if (starts_with_option(word, "--out")) {
       line.out = option_value(words, i, "--out");
+    } else if (starts_with_option(word, "--restart")) {
+      line.restart = option_value(words, i, "--restart");
     } else if (word == "--json") {
       line.json = true;
     } else if (word == "--configuration") {

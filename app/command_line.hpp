@@ -14,6 +14,7 @@ struct CommandLine {
   std::vector<std::string> positional;  // e.g. the configuration file
   std::vector<std::string> overrides;   // every --set value, in order
   std::optional<std::string> out;       // --out DIR
+  std::optional<std::string> restart;   // --restart CHECKPOINT|RUN_FOLDER (run)
   bool help = false;
   bool version = false;
   bool markdown = false;             // --markdown (keys)

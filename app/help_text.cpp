@@ -27,6 +27,9 @@ std::string help_text() {
       "  --set SECTION.KEY=VALUE  override one configuration key (repeatable); the value is\n"
       "                           validated like the file, units allowed: --set box.size=20pc\n"
       "  --out DIR                run folder for `run` (default: output.folder, else runs/NAME)\n"
+      "  --restart PATH           `run`: continue from a checkpoint file, or from the newest\n"
+      "                           checkpoint of a run folder; --set may change clock.* and "
+      "output.*\n"
       "  --json                   machine-readable output for `bench` and `inspect`\n"
       "  --configuration          `inspect`: also print the resolved configuration in the file\n"
       "  --quiet, -q              only warnings and errors\n"
@@ -34,7 +37,8 @@ std::string help_text() {
       "  --help, -h               this text\n"
       "  --version                version, commit, compiler, flags and library versions\n"
       "\n"
-      "exit codes: 0 success, 1 internal error, 2 user error (bad input), 3 numerical failure\n"
+      "exit codes: 0 success, 1 internal error, 2 user error (bad input), 3 numerical failure,\n"
+      "            4 stopped early with a checkpoint (wall budget or signal): restart to go on\n"
       "in parallel: mpiexec -n RANKS brume run CONFIG  (same input file)\n"
       "documentation: docs/ in the source tree; every key: brume keys\n";
   return text;

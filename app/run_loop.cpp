@@ -27,12 +27,18 @@ RunSummary run_loop(solver::Integrator& integrator, solver::State& state, const 
   // Every rank holds the same time and step count (the time step is agreed), so the loop
   // condition and the step limit agree by themselves.
   while (state.time < limits.stop_time) {
-    if (limits.max_steps > 0 && summary.steps >= limits.max_steps) {
+    if (limits.max_steps > 0 && state.step >= limits.max_steps) {
       summary.end = RunEnd::step_limit;
       break;
     }
     const solver::StepAgreement agreed =
-        solver::agree_on_step(integrator.stable_time_step(state), wall(), comm);
+        solver::agree_on_step(integrator.stable_time_step(state), wall(), comm,
+                              hooks.stop_request ? hooks.stop_request() : 0);
+    if (agreed.stop_signal != 0) {
+      summary.end = RunEnd::stop_signal;
+      summary.signal = agreed.stop_signal;
+      break;
+    }
     if (limits.wall_budget > 0.0 && agreed.wall_seconds >= limits.wall_budget) {
       summary.end = RunEnd::wall_budget;
       break;
@@ -65,7 +71,7 @@ RunSummary run_loop(solver::Integrator& integrator, solver::State& state, const 
       summary.floored_in_step = floored;
       break;
     }
-    if (hooks.after_step) hooks.after_step(state);
+    if (hooks.after_step) hooks.after_step(state, summary, agreed.wall_seconds);
     sample.step = state.step;
     sample.time = state.time / limits.time_unit;
     sample.dt = dt / limits.time_unit;

@@ -29,7 +29,8 @@ enum class RunEnd {
   wall_budget,
   numerical_failure,
   time_step_collapse,
-  floors_exhausted
+  floors_exhausted,
+  stop_signal  // SIGTERM, SIGINT or SIGUSR1 (RunSummary::signal)
 };
 
 struct RunSummary {
@@ -43,6 +44,7 @@ struct RunSummary {
   long long fallback_cells = 0;
   solver::NumericalFailure failure;  // the non-finite cell, or the first floored cell
   long long floored_in_step = 0;     // cell-stages floored in the step that exhausted the floors
+  int signal = 0;                    // the stop signal that ended the run
   double last_dt = 0.0;              // the offending time step when the step collapsed
 };
 
@@ -52,8 +54,11 @@ struct RunHooks {
   // Simulated time of the next scheduled output (code units; none or +inf: no output): steps
   // land on it.
   std::function<double()> next_output;
-  // Called on every rank after every successful step (may be empty).
-  std::function<void(const solver::State&)> after_step;
+  // Called on every rank after every successful step with the summary so far and the wall time
+  // agreed at the start of the step (the same on every rank) (may be empty).
+  std::function<void(const solver::State&, const RunSummary&, double)> after_step;
+  // A stop request before each step: a signal number, 0 for none (may be empty).
+  std::function<int()> stop_request;
 };
 
 [[nodiscard]] RunSummary run_loop(solver::Integrator& integrator, solver::State& state,

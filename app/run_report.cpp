@@ -3,6 +3,7 @@
 #include <cmath>
 #include <cstdio>
 
+#include "app/stop_signals.hpp"
 #include "io/progress.hpp"
 #include "solver/exact_sum.hpp"
 
@@ -50,6 +51,8 @@ const char* end_text(RunEnd end) {
       return "stopped: the time step collapsed";
     case RunEnd::floors_exhausted:
       return "stopped: the floors acted on too many cells";
+    case RunEnd::stop_signal:
+      return "stopped on a stop signal";
   }
   return "?";
 }
@@ -98,6 +101,9 @@ std::string run_report(const RunSummary& s, const RunTotals& before, const RunTo
         s.floored_in_step, double(s.floored_in_step) / double(s.box_cells), s.box_cells,
         limits.floor_limit);
     report += text + cell_text(s.failure, state, limits) + " (before the floor)";
+  } else if (s.end == RunEnd::stop_signal) {
+    report += std::string("\n  ") + signal_name(s.signal) +
+              " received: stopped at the end of step " + std::to_string(state.step);
   } else if (s.end == RunEnd::time_step_collapse) {
     std::snprintf(text, sizeof text, "\n  time step %.6g at step %ld, t = %.6g %s", s.last_dt,
                   state.step, state.time / limits.time_unit, limits.time_unit_name);

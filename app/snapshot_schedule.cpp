@@ -53,12 +53,43 @@ void SnapshotSchedule::write_xdmf(const std::filesystem::path& file,
   if (!agreed.empty()) throw std::runtime_error(agreed);
 }
 
+namespace {
+
+std::string snapshot_name(int number) {
+  char name[32];
+  std::snprintf(name, sizeof name, "snapshot-%04d.h5", number);
+  return name;
+}
+
+}  // namespace
+
 void SnapshotSchedule::write(const solver::State& state, const std::string& reason) {
   if (state.step == last_step_) return;  // this state is written already
   last_step_ = state.step;
-  char name[32];
-  std::snprintf(name, sizeof name, "snapshot-%04d.h5", count_++);
-  write_file(folder_ / name, state, reason, true);
+  write_file(folder_ / snapshot_name(count_++), state, reason, true);
+}
+
+void SnapshotSchedule::save(io::RunRecord& record) const {
+  record.set("snapshot_count", static_cast<long long>(count_));
+  record.set("snapshot_next_time", next_);
+  record.set("snapshot_last_step", static_cast<long long>(last_step_));
+  std::vector<double> times;
+  for (const io::XdmfSnapshot& s : series_)
+    times.push_back(s.time);
+  record.set("snapshot_times", std::move(times));
+}
+
+void SnapshotSchedule::restore(const io::RunRecord& record, const solver::State& state) {
+  count_ = static_cast<int>(record.integer("snapshot_count"));
+  next_ = record.real("snapshot_next_time");
+  last_step_ = static_cast<long>(record.integer("snapshot_last_step"));
+  series_.clear();
+  const std::vector<double> times = record.array("snapshot_times");
+  for (std::size_t n = 0; n < times.size(); ++n) {
+    io::XdmfSnapshot s = io::xdmf_snapshot(snapshot_name(int(n)), state, info_);
+    s.time = times[n];
+    series_.push_back(s);
+  }
 }
 
 void SnapshotSchedule::write_failure(const solver::State& state) {

@@ -34,6 +34,13 @@ class SnapshotSchedule {
   // Writes the scheduled snapshot when `state` has reached its time. Collective.
   void after_step(const solver::State& state);
 
+  // The schedule's state, for checkpoints: numbering, next time, the times of the series.
+  void save(io::RunRecord& record) const;
+  // Continues the schedule saved in `record`; `state` is the restarted state (for the series).
+  void restore(const io::RunRecord& record, const solver::State& state);
+  // The number the next snapshot file takes.
+  [[nodiscard]] int next_number() const { return count_; }
+
  private:
   void write_file(const std::filesystem::path& file, const solver::State& state,
                   const std::string& reason, bool in_series);

@@ -11,6 +11,7 @@
 #include "io/chunk_shape.hpp"
 #include "io/hdf5_handles.hpp"
 #include "io/provenance.hpp"
+#include "io/run_record.hpp"
 #include "io/snapshot_layout.hpp"
 
 namespace brume::io {
@@ -93,6 +94,7 @@ void write_file(const std::string& path, const solver::State& state, const Snaps
   for (const SnapshotField& field : snapshot_fields(state.magnetic, state.isothermal))
     write_dataset(fields.get(), field, state, info, transfer.get());
   fields.close();
+  if (info.run_record) write_run_record(root, *info.run_record);
   if (!file.close()) throw std::runtime_error("HDF5: closing " + path + " failed");
 }
 

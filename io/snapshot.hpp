@@ -8,9 +8,11 @@
 
 #include <array>
 #include <filesystem>
+#include <optional>
 #include <string>
 
 #include "io/field_units.hpp"
+#include "io/run_record.hpp"
 #include "solver/state.hpp"
 
 namespace brume::io {
@@ -26,6 +28,8 @@ struct SnapshotInfo {
   // 0: contiguous datasets; 1–9: chunked (io/chunk_shape.hpp), byte-shuffled and deflated at this
   // zlib level, with a Fletcher-32 checksum per chunk.
   int deflate_level = 0;
+  // Present in checkpoints: the run's own state, written as the group /run (io/run_record.hpp).
+  std::optional<RunRecord> run_record;
 };
 
 // Collective over `comm`: every rank passes its own block. Throws std::runtime_error on failure

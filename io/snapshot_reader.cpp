@@ -9,6 +9,7 @@
 #include "io/hdf5_attribute_reader.hpp"
 #include "io/hdf5_error_text.hpp"
 #include "io/provenance.hpp"
+#include "io/run_record.hpp"
 
 namespace brume::io {
 
@@ -195,6 +196,11 @@ void SnapshotReader::read_header() {
   H5Handle build(checked(H5Gopen2(root, "build", H5P_DEFAULT), "opening /build"), H5Gclose);
   h.build = text_attributes(build.get());
   order_as_provenance(h.build);
+  try {
+    run_record_ = read_run_record(root);
+  } catch (const std::exception& error) {
+    throw SnapshotFileError(where() + error.what());
+  }
 }
 
 void SnapshotReader::read_datasets() {

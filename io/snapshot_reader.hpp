@@ -8,12 +8,14 @@
 
 #include <array>
 #include <filesystem>
+#include <optional>
 #include <stdexcept>
 #include <string>
 #include <utility>
 #include <vector>
 
 #include "io/hdf5_handles.hpp"
+#include "io/run_record.hpp"
 #include "io/snapshot_layout.hpp"
 #include "solver/state.hpp"
 
@@ -63,6 +65,8 @@ class SnapshotReader {
   [[nodiscard]] const std::vector<StoredDataset>& datasets() const { return datasets_; }
   [[nodiscard]] bool magnetic() const { return magnetic_; }
   [[nodiscard]] bool isothermal() const { return isothermal_; }
+  // The group /run of a checkpoint; empty for a plain snapshot.
+  [[nodiscard]] const std::optional<RunRecord>& run_record() const { return run_record_; }
   // The fields of this file, in the order they were written.
   [[nodiscard]] std::vector<SnapshotField> fields() const;
 
@@ -84,6 +88,7 @@ class SnapshotReader {
   std::vector<StoredDataset> datasets_;
   bool magnetic_ = false;
   bool isothermal_ = true;
+  std::optional<RunRecord> run_record_;
 };
 
 }  // namespace brume::io

@@ -4,12 +4,12 @@
 
 namespace brume::solver {
 
-StepAgreement agree_on_step(double time_step, double wall_seconds, MPI_Comm comm) {
-  // One MPI_MIN over (dt, −wall): the minimum of dt and the maximum of the wall times.
-  const double local[2] = {time_step, -wall_seconds};
-  double global[2] = {0.0, 0.0};
-  MPI_Allreduce(local, global, 2, MPI_DOUBLE, MPI_MIN, comm);
-  return {global[0], -global[1]};
+StepAgreement agree_on_step(double time_step, double wall_seconds, MPI_Comm comm, int stop_signal) {
+  // One MPI_MIN over (dt, −wall, −signal): the minimum of dt, the maxima of the others.
+  const double local[3] = {time_step, -wall_seconds, -double(stop_signal)};
+  double global[3] = {0.0, 0.0, 0.0};
+  MPI_Allreduce(local, global, 3, MPI_DOUBLE, MPI_MIN, comm);
+  return {global[0], -global[1], int(-global[2])};
 }
 
 double global_minimum(double value, MPI_Comm comm) {

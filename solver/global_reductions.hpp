@@ -12,13 +12,16 @@
 
 namespace brume::solver {
 
-// The smallest stable time step over all blocks and the largest elapsed wall time over all
-// ranks (so that every rank takes the same decision on a wall budget), in one collective.
+// The smallest stable time step over all blocks, the largest elapsed wall time over all ranks
+// and the largest stop request (a signal number, 0 for none), so that every rank takes the same
+// decision on a wall budget or a signal, in one collective.
 struct StepAgreement {
   double time_step = 0.0;
   double wall_seconds = 0.0;
+  int stop_signal = 0;
 };
-[[nodiscard]] StepAgreement agree_on_step(double time_step, double wall_seconds, MPI_Comm comm);
+[[nodiscard]] StepAgreement agree_on_step(double time_step, double wall_seconds, MPI_Comm comm,
+                                          int stop_signal = 0);
 
 [[nodiscard]] double global_minimum(double value, MPI_Comm comm);
 [[nodiscard]] long long global_sum(long long value, MPI_Comm comm);

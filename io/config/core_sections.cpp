@@ -190,11 +190,14 @@ Section clock() {
           "When the run stops.",
           {quantity_key("stop_time", dim::time, "Myr", "Simulated time at which the run ends.")
                .above(0),
-           integer_key("max_steps", "Largest number of time steps (0: no limit).")
+           integer_key("max_steps",
+                       "Step number at which the run stops, counted from its start across "
+                       "restarts (0: no limit).")
                .with_default("0")
                .at_least(0),
            quantity_key("wall_budget", dim::time, "h",
-                        "Wall-clock time after which the run stops cleanly (0: none).")
+                        "Wall-clock time of one invocation after which the run writes a "
+                        "checkpoint and stops with exit code 4 (0: none).")
                .with_default("0 h")
                .at_least(0)},
           {},
@@ -226,7 +229,14 @@ Section output() {
                    "Deflate level when output.compression is deflate: 1 fastest, 9 smallest.")
            .with_default("4")
            .at_least(1)
-           .at_most(9)},
+           .at_most(9),
+       quantity_key("checkpoint_interval", dim::time, "h",
+                    "Wall-clock time between checkpoints (0: only when the run stops).")
+           .with_default("1 h")
+           .at_least(0),
+       integer_key("checkpoints_kept", "How many of the newest checkpoints the run folder keeps.")
+           .with_default("2")
+           .at_least(1)},
       {},
       std::nullopt};
 }

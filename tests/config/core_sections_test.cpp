@@ -25,7 +25,7 @@ TEST(ConfigCoreSections, SectionsAndKeys) {
       {"clock", {"stop_time", "max_steps", "wall_budget"}},
       {"output",
        {"folder", "snapshot_interval", "progress_interval", "precision", "compression",
-        "compression_level"}},
+        "compression_level", "checkpoint_interval", "checkpoints_kept"}},
       {"problem", {"name"}}};
   const std::vector<Section> sections = core_sections({{"only", "The only problem."}});
   ASSERT_EQ(sections.size(), expected.size());
