@@ -34,8 +34,27 @@ const io::FieldSummary* summary_of(const io::SnapshotIntegrity& integrity,
   return nullptr;
 }
 
-std::string kind(const io::SnapshotHeader& h) {
-  return h.reason == "numerical failure" ? "diagnostic snapshot of a failed step" : "snapshot";
+std::string kind(const io::SnapshotReader& reader) {
+  if (reader.run_record()) return "checkpoint (restart with brume run --restart)";
+  return reader.header().reason == "numerical failure" ? "diagnostic snapshot of a failed step"
+                                                       : "snapshot";
+}
+
+// The group /run of a checkpoint, one entry per line.
+std::string run_record_lines(const io::RunRecord& record) {
+  std::string text = "  run state      group /run\n";
+  for (const auto& [name, value] : record.integers())
+    text += "    " + padded(name, 22) + std::to_string(value) + "\n";
+  for (const auto& [name, value] : record.reals())
+    text += "    " + padded(name, 22) + g(value, 17) + "\n";
+  for (const auto& [name, values] : record.arrays()) {
+    std::string list;
+    for (std::size_t n = 0; n < values.size() && n < 8; ++n)
+      list += (n == 0 ? "" : ", ") + g(values[n], 9);
+    text += "    " + padded(name, 22) + std::to_string(values.size()) + " values: " + list +
+            (values.size() > 8 ? ", ..." : "") + "\n";
+  }
+  return text;
 }
 
 std::string precision(const io::SnapshotReader& reader) {
@@ -87,7 +106,7 @@ std::string inspect_text(const io::SnapshotReader& reader, const io::SnapshotInt
   const io::SnapshotHeader& h = reader.header();
   const double seconds = h.time * h.time_to_cgs;
   std::string text = reader.file().string() + "\n";
-  text += "  kind           " + kind(h) + "\n";
+  text += "  kind           " + kind(reader) + "\n";
   text += "  format         " + h.format + "\n";
   text += "  reason         " + h.reason + "\n";
   text += "  time           " + g(h.time, 9) + " code units = " + g(seconds) +
@@ -102,6 +121,7 @@ std::string inspect_text(const io::SnapshotReader& reader, const io::SnapshotInt
           (reader.isothermal() ? ", isothermal" : ", adiabatic") + "\n";
   text += "  precision      " + precision(reader) + "\n";
   text += "  fields\n" + field_lines(reader, integrity);
+  if (reader.run_record()) text += run_record_lines(*reader.run_record());
   text += "  build\n";
   for (const auto& [name, value] : h.build)
     text += "    " + padded(name, 12) + value + "\n";
@@ -137,7 +157,7 @@ std::string inspect_json(const io::SnapshotReader& reader, const io::SnapshotInt
   };
   std::string j = "{\n";
   j += "  \"file\": " + json_string(reader.file().string()) + ",\n";
-  j += "  \"kind\": " + json_string(kind(h)) + ",\n";
+  j += "  \"kind\": " + json_string(kind(reader)) + ",\n";
   j += "  \"format\": " + json_string(h.format) + ",\n";
   j += "  \"reason\": " + json_string(h.reason) + ",\n";
   j += "  \"time\": " + json_number(h.time) + ",\n";

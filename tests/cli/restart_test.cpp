@@ -133,6 +133,12 @@ TEST(Restart, ContinuesBitForBitAndKeepsNumberingTheSnapshots) {
                                         (folder / "split" / "snapshot-0002.h5").string()});
   EXPECT_EQ(same.exit_code, 0) << same.output;
   EXPECT_NE(text_of(folder / "split" / "run.log").find("restart from"), std::string::npos);
+  // `brume inspect` knows a checkpoint and shows its run state.
+  const auto inspect =
+      run_brume("inspect '" + (folder / "split" / "checkpoint-0001.h5").string() + "'");
+  EXPECT_EQ(inspect.exit_code, 0) << inspect.err;
+  EXPECT_NE(inspect.out.find("kind           checkpoint"), std::string::npos) << inspect.out;
+  EXPECT_NE(inspect.out.find("snapshot_count        3"), std::string::npos) << inspect.out;
   fs::remove_all(folder);
 }
 
