@@ -11,6 +11,7 @@
 #include "app/run_report.hpp"
 #include "app/scheme_choice.hpp"
 #include "app/snapshot_schedule.hpp"
+#include "app/source_terms.hpp"
 #include "app/stop_signals.hpp"
 #include "app/user_error.hpp"
 #include "io/atomic_file.hpp"
@@ -50,10 +51,13 @@ RunLimits run_limits(const config::ResolvedConfig& config, const RunSetup& setup
 
 // The run's own state for a checkpoint: the snapshot schedule, the totals at the start of the
 // run (the report's reference) and the counts of floors and fallbacks since then.
-io::RunRecord run_record(const SnapshotSchedule& snapshots, const RunTotals& start,
-                         const io::RunRecord& earlier, const RunSummary& summary) {
+io::RunRecord run_record(const SnapshotSchedule& snapshots, const SplitIntegrator& integrator,
+                         const RunTotals& start, const io::RunRecord& earlier,
+                         const RunSummary& summary) {
   io::RunRecord record;
   snapshots.save(record);
+  for (const auto& term : integrator.terms())
+    term->save(record);
   record.set("initial_mass", start.mass);
   record.set("initial_momentum", std::vector<double>(start.momentum.begin(), start.momentum.end()));
   record.set("initial_energy", start.energy);
@@ -112,12 +116,15 @@ RunSession make_session(config::ResolvedConfig config) {
   solver::State state = solver::make_state(geometry, setup.magnetic, setup.isothermal);
   auto ghosts = std::make_shared<solver::HaloExchange>(*decomposition, boundaries, geometry,
                                                        setup.magnetic, setup.isothermal);
-  std::unique_ptr<solver::Integrator> integrator;
+  std::unique_ptr<solver::Integrator> ideal;
   try {
-    integrator = solver::make_integrator(options, geometry, ghosts);
+    ideal = solver::make_integrator(options, geometry, ghosts);
   } catch (const std::invalid_argument& error) {
     throw UserError(config.file_name() + ": scheme: " + error.what());
   }
+  auto integrator = std::make_unique<SplitIntegrator>(
+      std::move(ideal),
+      make_source_terms(config, source_context(setup, decomposition->comm(), ghosts)), ghosts);
   return {std::move(config),        setup,
           std::move(decomposition), std::move(state),
           std::move(ghosts),        std::move(integrator)};
@@ -143,8 +150,11 @@ int drive_run(RunSession& session, const std::filesystem::path& folder, const io
                                  resumed ? resumed->next_checkpoint : 0, comm, log);
   const io::RunRecord earlier = resumed ? resumed->record : io::RunRecord{};
   RunTotals start;
+  SplitIntegrator& integrator = *session.integrator;
   if (resumed) {
     snapshots.restore(resumed->record, state);
+    for (const auto& term : integrator.terms())
+      term->restore(resumed->record);
     start = recorded_totals(resumed->record);
   } else {
     snapshots.write(state, "initial");
@@ -156,11 +166,11 @@ int drive_run(RunSession& session, const std::filesystem::path& folder, const io
   hooks.after_step = [&](const solver::State& s, const RunSummary& so_far, double wall) {
     snapshots.after_step(s);
     if (checkpoints.due(wall))
-      checkpoints.write(s, run_record(snapshots, start, earlier, so_far), wall);
+      checkpoints.write(s, run_record(snapshots, integrator, start, earlier, so_far), wall);
   };
   hooks.stop_request = [] { return StopSignals::received(); };
   const RunSummary summary =
-      run_loop(*session.integrator, state, limits, log, *session.decomposition, hooks);
+      run_loop(integrator, state, limits, log, *session.decomposition, hooks);
   const bool failed = summary.end == RunEnd::numerical_failure ||
                       summary.end == RunEnd::floors_exhausted ||
                       summary.end == RunEnd::time_step_collapse;
@@ -170,9 +180,13 @@ int drive_run(RunSession& session, const std::filesystem::path& folder, const io
   } else {
     // A run that stopped early is not finished: it gets a checkpoint, not a final snapshot.
     if (!early && state.time > 0.0) snapshots.write(state, "final");
-    checkpoints.write(state, run_record(snapshots, start, earlier, summary), summary.wall_seconds);
+    checkpoints.write(state, run_record(snapshots, integrator, start, earlier, summary),
+                      summary.wall_seconds);
   }
-  const std::string report = run_report(summary, start, totals(state, comm), state, limits);
+  std::string report = run_report(summary, start, totals(state, comm), state, limits);
+  for (const auto& term : integrator.terms()) {
+    if (const std::string line = term->report(); !line.empty()) report += "\n  " + line;
+  }
   log.info(report);
   on_rank_zero(comm, [&] { io::write_file_atomically(folder / "summary.txt", report + "\n"); });
   if (failed) return exit_numerical_failure;

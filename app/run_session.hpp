@@ -9,6 +9,7 @@
 
 #include "app/mpi_session.hpp"
 #include "app/run_setup.hpp"
+#include "app/split_integrator.hpp"
 #include "io/config/resolved.hpp"
 #include "io/log.hpp"
 #include "io/run_record.hpp"
@@ -25,7 +26,7 @@ struct RunSession {
   std::unique_ptr<solver::Decomposition> decomposition;
   solver::State state;  // this rank's block, not yet set
   std::shared_ptr<solver::HaloExchange> ghosts;
-  std::unique_ptr<solver::Integrator> integrator;
+  std::unique_ptr<SplitIntegrator> integrator;  // the ideal step with the source terms
 };
 
 // Collective. Throws UserError for a box that does not divide over the ranks or impossible

@@ -1,0 +1,33 @@
+#include "app/source_terms.hpp"
+
+#include <utility>
+
+namespace brume::app {
+
+physics::SourceContext source_context(const RunSetup& setup, MPI_Comm comm,
+                                      std::shared_ptr<const solver::GhostFiller> ghosts) {
+  physics::SourceContext c;
+  c.code_units = setup.code_units;
+  c.gamma = setup.gamma;
+  c.sound_speed = setup.sound_speed;
+  c.mean_molecular_weight = setup.mean_molecular_weight;
+  c.isothermal = setup.isothermal;
+  c.magnetic = setup.magnetic;
+  c.box_cells = setup.cells;
+  c.box_lower = setup.lower;
+  c.box_size = setup.size;
+  c.comm = comm;
+  c.ghosts = std::move(ghosts);
+  return c;
+}
+
+std::vector<std::unique_ptr<physics::SourceTerm>> make_source_terms(
+    const config::ResolvedConfig& config, const physics::SourceContext& context) {
+  std::vector<std::unique_ptr<physics::SourceTerm>> terms;
+  // Each module adds its term here when its section asks for it, in the order of the first
+  // half step (the header says which).
+  (void)config, (void)context;
+  return terms;
+}
+
+}  // namespace brume::app
