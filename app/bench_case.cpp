@@ -48,8 +48,7 @@ BenchResult run_bench_case(const BenchCase& c) {
   using clock = std::chrono::steady_clock;
   const SchemeOptions o = bench_scheme(c);
   const int ng = required_ghost_layers(o);
-  // MPI: each rank will own one block of a decomposed box and the ghost filler will exchange
-  // halos; the rate below is then per rank (= per core). One rank for now.
+  // One rank, one block; decomposed boxes are `brume bench scaling` (bench_decomposed_case.hpp).
   const int ranks = 1;
   const BlockGeometry g = whole_box_geometry({c.cells, c.cells, c.cells}, {0, 0, 0}, {1, 1, 1}, ng);
   State state = make_state(g, o.magnetic, false);

@@ -1,37 +1,18 @@
-// brume bench: cell-updates per second per core and bytes per cell of the main schemes.
+// brume bench: cell-updates per second per core and bytes per cell of the main schemes on one
+// rank; `brume bench scaling` measures them over rank counts (bench_scaling.hpp).
 #include <cstdio>
 #include <string>
 #include <vector>
 
 #include "app/bench_case.hpp"
+#include "app/bench_json.hpp"
+#include "app/bench_options.hpp"
+#include "app/bench_scaling.hpp"
 #include "app/commands.hpp"
 #include "app/user_error.hpp"
-#include "io/provenance.hpp"
 
 namespace brume::app {
 namespace {
-
-int positive_count(const std::optional<std::string>& text, const char* option, int fallback) {
-  if (!text) return fallback;
-  std::size_t used = 0;
-  int value = 0;
-  try {
-    value = std::stoi(*text, &used);
-  } catch (const std::exception&) {
-    used = 0;
-  }
-  if (used != text->size() || value < 1) {
-    throw UserError(std::string("command line: ") + option +
-                    " expects a positive integer, found '" + *text + "'");
-  }
-  return value;
-}
-
-// Default timed steps: about 2.6 million cell-updates per case, at least three steps.
-int default_steps(int cells) {
-  const double per_step = double(cells) * cells * cells;
-  return std::max(3, int(2.7e6 / per_step));
-}
 
 std::vector<BenchCase> bench_cases(const CommandLine& line) {
   std::vector<int> sizes = {64, 128};
@@ -49,41 +30,12 @@ std::vector<BenchCase> bench_cases(const CommandLine& line) {
   return cases;
 }
 
-std::string provenance_value(const char* name) {
-  for (const auto& [key, value] : io::provenance()) {
-    if (key == name) return value;
-  }
-  return "";
-}
-
-std::string json_string(const std::string& text) {
-  std::string out = "\"";
-  for (const char ch : text) {
-    if (ch == '"' || ch == '\\') out += '\\';
-    if (static_cast<unsigned char>(ch) < 0x20) continue;
-    out += ch;
-  }
-  return out + "\"";
-}
-
 void print_json(const std::vector<BenchResult>& results) {
   std::printf("{\"cases\": [");
   for (std::size_t n = 0; n < results.size(); ++n) {
-    const BenchResult& r = results[n];
-    std::printf(
-        "%s\n  {\"physics\": \"%s\", \"reconstruction\": \"%s\", \"riemann\": \"%s\", "
-        "\"cells\": %ld, \"cells_per_dimension\": %d, \"ranks\": %d, \"steps\": %d, "
-        "\"seconds\": %.6g, \"cell_updates_per_second_per_core\": %.6g, "
-        "\"best_step_cell_updates_per_second_per_core\": %.6g, \"bytes_per_cell\": %.6g}",
-        n == 0 ? "" : ",", r.setup.physics.c_str(), r.setup.reconstruction.c_str(),
-        r.setup.riemann.c_str(), r.interior_cells, r.setup.cells, r.ranks, r.setup.steps, r.seconds,
-        r.cell_updates_per_second_per_core, r.best_cell_updates_per_second_per_core,
-        r.bytes_per_cell);
+    std::printf("%s\n  {%s}", n == 0 ? "" : ",", bench_case_fields(results[n]).c_str());
   }
-  std::printf("\n ],\n \"bytes_per_cell_source\": \"allocated arrays (state and integrator)\",\n");
-  std::printf(" \"compiler\": %s,\n \"flags\": %s}\n",
-              json_string(provenance_value("compiler")).c_str(),
-              json_string(provenance_value("flags")).c_str());
+  std::fputs(bench_json_trailer("allocated arrays (state and integrator)").c_str(), stdout);
 }
 
 void print_table(const BenchResult& r) {
@@ -97,9 +49,13 @@ void print_table(const BenchResult& r) {
 }  // namespace
 
 int bench_command(const CommandLine& line, const io::Log& log) {
+  if (line.positional.size() == 1 && line.positional.front() == "scaling") {
+    return scaling_bench(line, log);
+  }
   if (!line.positional.empty()) {
-    throw UserError(
-        "command line: brume bench takes no argument ([--json] [--cells N] [--steps N])");
+    throw UserError("command line: brume bench takes no argument or the word 'scaling', found '" +
+                    line.positional.front() + "' (brume bench [scaling] [--json] [--cells N] " +
+                    "[--steps N])");
   }
   const std::vector<BenchCase> cases = bench_cases(line);
   const bool table = !line.json && log.speaks();

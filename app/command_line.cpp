@@ -16,8 +16,9 @@ const std::vector<SubcommandInfo>& subcommands() {
       {"keys", "[SECTION] [--markdown]",
        "list every configuration key: type, unit, default, range"},
       {"problems", "", "list the initial conditions brume can set up"},
-      {"bench", "[--json] [--cells N] [--steps N]",
-       "measure cell-updates per second per core and bytes per cell of the main schemes"},
+      {"bench", "[scaling] [--json] [--cells N] [--steps N]",
+       "measure cell-updates per second per core and bytes per cell of the main schemes; "
+       "scaling: the same over 1, 2, 4, ... ranks (under mpiexec)"},
       {"inspect", "FILE [--json] [--configuration]",
        "describe a snapshot (fields, units, provenance) and check that it is sound"},
   };

@@ -120,12 +120,7 @@ void HaloExchange::exchange_axis(const std::array<Field, 8>& f, int count, int a
   const int ng = block_.ghost_layers;
   // Layers per field: sent down (and received from above) carry the shared face too.
   auto down_layers = [&](const Field& field) { return ng + (field.staggered ? 1 : 0); };
-  int down_size = 0, up_size = 0;
-  const int plane = int(block_.storage_size() / std::size_t(block_.extent(axis)));
-  for (int a = 0; a < count; ++a) {
-    down_size += plane * down_layers(f[a]);
-    up_size += plane * ng;
-  }
+  const auto [down_size, up_size] = message_doubles(axis);
   const int lower = neighbours_[axis][0], upper = neighbours_[axis][1];
   std::array<MPI_Request, 4> requests{MPI_REQUEST_NULL, MPI_REQUEST_NULL, MPI_REQUEST_NULL,
                                       MPI_REQUEST_NULL};
@@ -216,6 +211,52 @@ void HaloExchange::exchange_flags(const BlockGeometry& g,
     }
   }
   if (cells.size() != interior) std::sort(cells.begin(), cells.end());
+}
+
+std::array<int, 2> HaloExchange::message_doubles(int axis) const {
+  const int field_count = 4 + (isothermal_ ? 0 : 1) + (magnetic_ ? 3 : 0);
+  const int staggered = magnetic_ ? 1 : 0;  // the face field normal to the axis
+  const int plane = int(block_.storage_size() / std::size_t(block_.extent(axis)));
+  const int ng = block_.ghost_layers;
+  return {plane * (field_count * ng + staggered), plane * field_count * ng};
+}
+
+HaloExchange::Traffic HaloExchange::fill_traffic() const {
+  Traffic t;
+  for (int axis = 0; axis < 3; ++axis) {
+    if (!exchanges(axis)) continue;
+    const std::array<int, 2> doubles = message_doubles(axis);
+    for (int side = 0; side < 2; ++side) {
+      if (neighbours_[axis][side] == MPI_PROC_NULL) continue;
+      t.messages += 1;
+      t.bytes += (long long)doubles[std::size_t(side)] * (long long)sizeof(double);
+    }
+  }
+  return t;
+}
+
+HaloExchange::Traffic HaloExchange::flag_traffic() const {
+  Traffic t;
+  for (int axis = 0; axis < 3; ++axis) {
+    if (!exchanges(axis)) continue;
+    for (int side = 0; side < 2; ++side) {
+      if (neighbours_[axis][side] == MPI_PROC_NULL) continue;
+      t.messages += 1;
+      t.bytes += (long long)layer_plane_size(block_, axis);
+    }
+  }
+  return t;
+}
+
+std::size_t HaloExchange::allocated_bytes() const {
+  std::size_t bytes = 0;
+  for (int axis = 0; axis < 3; ++axis) {
+    for (int side = 0; side < 2; ++side) {
+      bytes += (send_[axis][side].capacity() + receive_[axis][side].capacity()) * sizeof(double);
+      bytes += flags_send_[axis][side].capacity() + flags_receive_[axis][side].capacity();
+    }
+  }
+  return bytes;
 }
 
 bool HaloExchange::any_block(bool local) const {

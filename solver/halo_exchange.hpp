@@ -41,6 +41,17 @@ class HaloExchange final : public GhostFiller {
   // Collective: a logical or over every rank.
   [[nodiscard]] bool any_block(bool local) const override;
 
+  // What this rank sends in one fill, or in one exchange of fallback flags: point-to-point
+  // messages and their bytes (an axis one rank spans, or a box face, sends nothing).
+  struct Traffic {
+    int messages = 0;
+    long long bytes = 0;
+  };
+  [[nodiscard]] Traffic fill_traffic() const;
+  [[nodiscard]] Traffic flag_traffic() const;
+  // Bytes of the message buffers (their capacity), for `brume bench`.
+  [[nodiscard]] std::size_t allocated_bytes() const;
+
  private:
   // One stored array as the exchange along an axis sees it.
   struct Field {
@@ -51,6 +62,11 @@ class HaloExchange final : public GhostFiller {
   int fields(State& state, int axis, std::array<Field, 8>& out) const;
   void fill_axis_locally(const std::array<Field, 8>& f, int count, int axis) const;
   void exchange_axis(const std::array<Field, 8>& f, int count, int axis) const;
+  // Doubles sent towards the lower neighbour (with the shared faces) and towards the upper one.
+  [[nodiscard]] std::array<int, 2> message_doubles(int axis) const;
+  [[nodiscard]] bool exchanges(int axis) const {
+    return block_.active(axis) && !self_periodic_[axis];
+  }
 
   MPI_Comm comm_;
   BoxBoundaries boundaries_;

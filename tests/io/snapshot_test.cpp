@@ -2,10 +2,12 @@
 
 #include <gtest/gtest.h>
 #include <mpi.h>
+#include <unistd.h>
 
 #include <cstdlib>
 #include <filesystem>
 #include <fstream>
+#include <string>
 
 namespace fs = std::filesystem;
 
@@ -40,7 +42,9 @@ void write_and_check(int deflate_level) {
   info.units.density = 2.0e-24;
   info.configuration = "box:\n  cells: [6, 5, 4]\n";
   info.reason = "test";
-  const fs::path folder = fs::temp_directory_path() / "brume-snapshot-test";
+  // One folder per process: ctest runs the tests of this file in parallel.
+  const fs::path folder =
+      fs::temp_directory_path() / ("brume-snapshot-test-" + std::to_string(::getpid()));
   fs::remove_all(folder);
   fs::create_directories(folder);
   const fs::path file = folder / "fields.h5";
