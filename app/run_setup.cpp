@@ -7,6 +7,7 @@
 #include <cstdio>
 
 #include "app/scheme_choice.hpp"
+#include "physics/cooling_summary.hpp"
 #include "solver/box_boundaries.hpp"
 #include "solver/units/constants.hpp"
 
@@ -148,6 +149,10 @@ std::vector<std::pair<std::string, std::string>> derived_quantities(
     const double stop = config.real("clock.stop_time") / u.time();
     add("estimated time step", number(dt * u.time() / cgs::megayear, "Myr"));
     add("estimated steps to the stop time", number(std::ceil(stop / dt)));
+  }
+  if (config.flag("cooling.enabled") && !s.isothermal) {
+    for (auto& line : physics::cooling_summary(physics::cooling_settings(config), s.gamma))
+      lines.push_back(std::move(line));
   }
   return lines;
 }

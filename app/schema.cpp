@@ -1,6 +1,9 @@
 #include "app/schema.hpp"
 
 #include "io/config/core_sections.hpp"
+#include "physics/cooling_settings.hpp"
+#include "physics/diffusion_section.hpp"
+#include "physics/stirring_settings.hpp"
 #include "problems/problem.hpp"
 
 namespace brume::app {
@@ -9,6 +12,9 @@ const config::Schema& brume_schema() {
   static const config::Schema schema = config::Schema::combine({
       config::core_sections(problems::problem_choices()),
       problems::problem_sections(),
+      {physics::stirring_section()},
+      {physics::cooling_section()},
+      {physics::diffusion_section()},
   });
   return schema;
 }

@@ -2,6 +2,11 @@
 
 #include <utility>
 
+#include "physics/cooling_term.hpp"
+#include "physics/diffusion_section.hpp"
+#include "physics/diffusion_term.hpp"
+#include "physics/stirring_term.hpp"
+
 namespace brume::app {
 
 physics::SourceContext source_context(const RunSetup& setup, MPI_Comm comm,
@@ -27,6 +32,17 @@ std::vector<std::unique_ptr<physics::SourceTerm>> make_source_terms(
   // Each module adds its term here when its section asks for it, in the order of the first
   // half step (the header says which).
   (void)config, (void)context;
+  if (physics::stirring_enabled(config))
+    terms.push_back(physics::make_stirring_term(config, context));
+  if (config.flag("cooling.enabled")) {
+    terms.push_back(
+        std::make_unique<physics::CoolingTerm>(physics::cooling_settings(config), context));
+  }
+  if (physics::diffusion_requested(config)) {
+    terms.push_back(
+        std::make_unique<physics::DiffusionTerm>(physics::diffusion_coefficients(config, context),
+                                                 physics::diffusion_max_stages(config), context));
+  }
   return terms;
 }
 

@@ -78,14 +78,7 @@ void set_up(const SetupContext& c, solver::State& state) {
                                        static_cast<int>(c.config.integer(key("highest_mode"))),
                                        gas.speed,
                                        static_cast<std::uint64_t>(c.config.integer(key("seed"))));
-  std::array<double, 3> mean_field = c.config.reals3(key("mean_field"));
-  for (double& b : mean_field)
-    b /= c.code_units.magnetic_field();
-  if (state.magnetic) {
-    set_face_field(state, mean_field, [](double, double, double) {
-      return std::array<double, 3>{0.0, 0.0, 0.0};
-    });
-  }
+  set_uniform_field(state, c.config.reals3(key("mean_field")), c.code_units.magnetic_field());
   const double pressure = state.isothermal ? 0.0 : gas.pressure;
   fill_cells(state, c.gamma, [&](double x, double y, double z) {
     const auto v = velocity(x - c.box_lower[0], y - c.box_lower[1], z - c.box_lower[2]);

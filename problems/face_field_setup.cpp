@@ -50,4 +50,14 @@ void set_face_field(solver::State& state, const std::array<double, 3>& uniform,
   }
 }
 
+void set_uniform_field(solver::State& state, std::array<double, 3> gauss,
+                       double code_magnetic_field) {
+  if (!state.magnetic) return;
+  for (double& b : gauss)
+    b /= code_magnetic_field;
+  set_face_field(state, gauss, [](double, double, double) {
+    return std::array<double, 3>{0.0, 0.0, 0.0};
+  });
+}
+
 }  // namespace brume::problems

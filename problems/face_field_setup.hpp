@@ -18,4 +18,8 @@ using VectorPotential = std::function<std::array<double, 3>(double x, double y, 
 void set_face_field(solver::State& state, const std::array<double, 3>& uniform,
                     const VectorPotential& potential);
 
+// A uniform field given in gauss on every face of a magnetized state (nothing for hydrodynamics).
+void set_uniform_field(solver::State& state, std::array<double, 3> gauss,
+                       double code_magnetic_field);
+
 }  // namespace brume::problems

@@ -2,6 +2,7 @@
 
 #include "problems/blast_wave.hpp"
 #include "problems/decaying_turbulence.hpp"
+#include "problems/driven_turbulence.hpp"
 #include "problems/field_loop.hpp"
 #include "problems/kelvin_helmholtz.hpp"
 #include "problems/linear_wave.hpp"
@@ -9,6 +10,7 @@
 #include "problems/polarized_alfven_wave.hpp"
 #include "problems/problem.hpp"
 #include "problems/shock_tube.hpp"
+#include "problems/thermal_instability.hpp"
 
 namespace brume::problems {
 
@@ -18,6 +20,7 @@ const std::vector<Problem>& all_problems() {
       orszag_tang_problem(),         blast_wave_problem(),
       kelvin_helmholtz_problem(),    shock_tube_problem(),
       linear_wave_problem(),         polarized_alfven_wave_problem(),
+      driven_turbulence_problem(),   thermal_instability_problem(),
   };
   return list;
 }

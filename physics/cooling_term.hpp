@@ -1,0 +1,41 @@
+// Heating and cooling as an operator-split source term: each cell's thermal energy (total minus
+// kinetic and magnetic) follows de/dt = −(n²Λ(T) − nΓ) at constant density over the half step,
+// integrated by physics::CellCooler (cooling_cell_integrator.hpp). Density, momentum and field are
+// untouched. The term holds no state of its own beyond report counters, so a restart needs
+// nothing from the checkpoint.
+#pragma once
+
+#include "physics/cooling_settings.hpp"
+#include "physics/source_context.hpp"
+#include "physics/source_term.hpp"
+#include "solver/exact_sum.hpp"
+
+namespace brume::physics {
+
+class CoolingTerm final : public SourceTerm {
+ public:
+  // Throws config::Error for an isothermal gas (the schema refuses it first).
+  CoolingTerm(CoolingSettings settings, SourceContext context);
+
+  [[nodiscard]] std::string name() const override { return "cooling"; }
+  void advance(solver::State& state, double dt) override;
+  [[nodiscard]] double time_step_limit(const solver::State& state) const override;
+  // Collective over the context's communicator (every rank calls it).
+  [[nodiscard]] std::string report() const override;
+
+ private:
+  template <class Function>
+  void advance_cells(const Function& function, solver::State& state, double dt);
+
+  CoolingSettings settings_;
+  SourceContext context_;
+  double number_density_unit_;  // cm^-3 per code density
+  double temperature_unit_;     // K per code (p/ρ)
+  long long cell_updates_ = 0;
+  long long substeps_ = 0;
+  long long limited_cells_ = 0;
+  long long fast_path_cells_ = 0;  // kept the Rosenbrock steps (fast path)
+  solver::ExactSum radiated_;      // net energy lost by the gas, erg
+};
+
+}  // namespace brume::physics
