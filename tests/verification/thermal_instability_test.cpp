@@ -3,15 +3,16 @@
 // condensation mode on the unstable branch against the real root of Field's (1965, ApJ 142, 531)
 // cubic dispersion relation, and the decay of the mode on the stable warm branch.
 //
-// Conduction hook: field_cubic takes a conductivity κ (0 here). Once a conduction term exists, a
-// variant runs the same input with conduction enabled and passes its κ, which adds κk² to the
-// temperature derivative of the loss and stabilizes wavelengths below the Field length.
+// With constant conduction (the `diffusion` section, RKL2), the same cubic with κk² added to the
+// temperature derivative of the loss: the growth of a mode twice the critical wavelength, and the
+// damping of a mode shorter than it.
 #include <gtest/gtest.h>
 
 #include <array>
 #include <cmath>
 #include <cstdio>
 #include <numbers>
+#include <string>
 #include <vector>
 
 #include "app/source_terms.hpp"
@@ -32,6 +33,12 @@ namespace cgs = units::cgs;
 //   s³ + A s² + γ c² k² s + k² B = 0,  c² = p/ρ,
 //   A = (γ − 1) T (𝓛_T + κk²) / p,  B = (γ − 1) [T (𝓛_T + κk²) − n 𝓛_n] / ρ,
 // with 𝓛 = n²Λ − nΓ, 𝓛_T = ∂𝓛/∂T at constant n, 𝓛_n = ∂𝓛/∂n at constant T.
+// Conduction: the energy equation of gas at rest gains ∇·(κ∇T) (Fourier's law; common practice),
+//   (∂p/∂t − γ (p/ρ) ∂ρ/∂t) / (γ − 1) = −𝓛(n, T) + ∇·(κ∇T);
+// about uniform T, ∇T = 0, so only κ(T_eq) enters at linear order, and for exp(st + ikx)
+// ∇·(κ∇δT) = −κk² δT: the loss derivative becomes 𝓛_T + κk², as in Field 1965 (his cubic with
+// conduction; from memory). Its constant term changes sign at k² = −(T𝓛_T − n𝓛_n)/(κT): shorter
+// waves have no positive root (physics::field_critical_wavelength).
 struct FieldCubic {
   double a, b, c;  // s³ + a s² + b s + c
   [[nodiscard]] double operator()(double s) const { return ((s + a) * s + b) * s + c; }
@@ -92,6 +99,8 @@ struct Growth {
   double initial = 0.0;
   double final_amplitude = 0.0;
   long steps = 0;
+  double wavelength = 0.0;           // cm
+  double critical_wavelength = 0.0;  // cm, NaN without conduction or on a stable branch
 };
 
 Growth run_mode(const std::vector<std::string>& overrides, double t_first_myr, double t_end_myr) {
@@ -113,9 +122,16 @@ Growth run_mode(const std::vector<std::string>& overrides, double t_first_myr, d
         2 * std::numbers::pi * double(mode[std::size_t(d)]) / run.setup.size[std::size_t(d)];
     k2 += std::pow(k_code[std::size_t(d)] / run.setup.code_units.length, 2);
   }
+  // κ(T_eq) is all the linear theory needs; the tests here use the constant law or none.
+  const std::string& law = run.config.text("diffusion.conduction");
+  EXPECT_TRUE(law == "off" || law == "constant") << law;
+  const double kappa = law == "constant" ? run.config.real("diffusion.conductivity") : 0.0;
   Growth g;
-  g.predicted = real_root(field_cubic(cooling.net, n, t, run.setup.gamma, mu, std::sqrt(k2), 0.0)) *
-                cgs::megayear;
+  g.wavelength = 2 * std::numbers::pi / std::sqrt(k2);
+  g.critical_wavelength = physics::field_critical_wavelength(cooling.net, n, t, kappa);
+  g.predicted =
+      real_root(field_cubic(cooling.net, n, t, run.setup.gamma, mu, std::sqrt(k2), kappa)) *
+      cgs::megayear;
   const double myr = cgs::megayear / run.setup.code_units.time();
   g.initial = mode_amplitude(run.state, k_code, run.setup.lower);
   double sum_t = 0, sum_y = 0, sum_tt = 0, sum_ty = 0;
@@ -165,6 +181,73 @@ TEST(ThermalInstability, ModeOnTheStableWarmBranchDecays) {
   // e^(−2.2 × 3) ≈ 1e-3 for the condensation mode alone; the sound waves the start excites hold
   // ~1 % of the amplitude and are damped more slowly (Field's complex pair, ≈ −0.95 /Myr).
   EXPECT_LT(std::fabs(g.final_amplitude), 0.05 * g.initial);
+}
+
+// Constant conduction κ = 6.5e6 erg s^-1 cm^-1 K^-1 puts the critical wavelength at 1.50 pc, half
+// the 3 pc mode (λ = 2 λ_crit; λ ≈ 19 √(κT/(n²Λ)), the estimate of Begelman & McKee 1990, ApJ
+// 358, 375, eq. 1, from memory): Field's root with the κk² term is 0.410 /Myr, against 0.542 /Myr
+// without conduction, so a 5 % check tells the two apart.
+TEST(ThermalInstabilityConduction, ModeTwiceTheCriticalWavelengthGrowsAtFieldsRate) {
+  const Growth g = run_mode(
+      {"diffusion.conduction=constant", "diffusion.conductivity=6.5e6 erg s^-1 cm^-1 K^-1"}, 1.0,
+      6.0);
+  std::printf(
+      "[thermal instability, conduction] lambda/lambda_crit %.3f, growth rate %.5f /Myr measured "
+      "over 1-6 Myr, Field's root with conduction %.5f /Myr, relative difference %.2e, amplitude "
+      "%.3e -> %.3e, %ld steps\n",
+      g.wavelength / g.critical_wavelength, g.measured, g.predicted, g.measured / g.predicted - 1,
+      g.initial, g.final_amplitude, g.steps);
+  // The set-up is the one described above (λ_crit from physics::field_critical_wavelength).
+  EXPECT_NEAR(g.wavelength / g.critical_wavelength, 2.0, 0.05);
+  ASSERT_GT(g.predicted, 0.0);
+  // 5 %: the brief's tolerance; 64 cells per wavelength, and the RKL2 half steps are second
+  // order (docs/diffusion.md), so the scheme's error is well below it.
+  EXPECT_NEAR(g.measured / g.predicted, 1.0, 0.05);
+  EXPECT_GT(g.final_amplitude / g.initial, 3.0);
+  EXPECT_LT(g.final_amplitude, 0.1);
+}
+
+// κ = 6e7 erg s^-1 cm^-1 K^-1: λ_crit = 4.54 pc, so the 3 pc mode (λ = 0.66 λ_crit) is below the
+// critical wavelength and Field's cubic has no positive root; its real root is ≈ −0.73 /Myr, and
+// the sound waves the start excites (≈ 1 % of the amplitude) decay faster (complex pair ≈ −1.28
+// /Myr), so the fit over 1-5 Myr sees the condensation mode alone.
+TEST(ThermalInstabilityConduction, ModeBelowTheCriticalWavelengthIsDamped) {
+  const Growth g =
+      run_mode({"diffusion.conduction=constant", "diffusion.conductivity=6e7 erg s^-1 cm^-1 K^-1"},
+               1.0, 5.0);
+  std::printf(
+      "[thermal instability, conduction, damped] lambda/lambda_crit %.3f, rate %.5f /Myr measured "
+      "over 1-5 Myr, Field's root with conduction %.5f /Myr, relative difference %.2e, amplitude "
+      "%.3e -> %.3e, %ld steps\n",
+      g.wavelength / g.critical_wavelength, g.measured, g.predicted, g.measured / g.predicted - 1,
+      g.initial, g.final_amplitude, g.steps);
+  EXPECT_LT(g.wavelength / g.critical_wavelength, 1.0);
+  ASSERT_LT(g.predicted, 0.0);  // no positive root
+  EXPECT_LT(g.measured, 0.0);
+  EXPECT_LT(std::fabs(g.final_amplitude), 0.1 * g.initial);  // e^(−0.73 × 5) ≈ 0.03
+  // The rate too, within the same 5 % as the growing mode.
+  EXPECT_NEAR(g.measured / g.predicted, 1.0, 0.05);
+}
+
+// The growth test's κ = 6.5e6 erg s^-1 cm^-1 K^-1 with three wavelengths along the box (1 pc =
+// 0.67 λ_crit), 192 cells (64 per wavelength as above): without conduction this mode would grow
+// at 0.550 /Myr; with it Field's real root is ≈ −0.683 /Myr (sound pair ≈ −1.28 /Myr).
+TEST(ThermalInstabilityConduction, ShorterModeAtTheSameConductivityIsDamped) {
+  const Growth g =
+      run_mode({"diffusion.conduction=constant", "diffusion.conductivity=6.5e6 erg s^-1 cm^-1 K^-1",
+                "box.cells=[192, 1, 1]", "problem.thermal_instability.mode=[3, 0, 0]"},
+               1.0, 5.0);
+  std::printf(
+      "[thermal instability, conduction, 3 waves] lambda/lambda_crit %.3f, rate %.5f /Myr "
+      "measured over 1-5 Myr, Field's root with conduction %.5f /Myr, relative difference %.2e, "
+      "amplitude %.3e -> %.3e, %ld steps\n",
+      g.wavelength / g.critical_wavelength, g.measured, g.predicted, g.measured / g.predicted - 1,
+      g.initial, g.final_amplitude, g.steps);
+  EXPECT_NEAR(g.wavelength / g.critical_wavelength, 2.0 / 3.0, 0.02);
+  ASSERT_LT(g.predicted, 0.0);  // no positive root
+  EXPECT_LT(g.measured, 0.0);
+  EXPECT_LT(std::fabs(g.final_amplitude), 0.1 * g.initial);  // e^(−0.683 × 5) ≈ 0.03
+  EXPECT_NEAR(g.measured / g.predicted, 1.0, 0.05);          // the same 5 %
 }
 
 // The same mode, oblique (k along [1, 1, 0]) in a 3D box of 24³ cells: the 3D set-up and the
