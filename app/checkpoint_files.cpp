@@ -17,9 +17,9 @@ fs::path checkpoint_name(int number) {
   return name;
 }
 
-std::optional<int> checkpoint_number(const fs::path& file) {
+std::optional<int> output_number(const fs::path& file, const std::string& stem) {
   const std::string name = file.filename().string();
-  const std::string prefix = "checkpoint-", suffix = ".h5";
+  const std::string prefix = stem + "-", suffix = ".h5";
   if (name.size() <= prefix.size() + suffix.size() || name.rfind(prefix, 0) != 0 ||
       name.compare(name.size() - suffix.size(), suffix.size(), suffix) != 0) {
     return std::nullopt;

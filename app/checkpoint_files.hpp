@@ -3,6 +3,7 @@
 
 #include <filesystem>
 #include <optional>
+#include <string>
 #include <vector>
 
 namespace brume::app {
@@ -10,8 +11,15 @@ namespace brume::app {
 // checkpoint-NNNN.h5 (four digits at least).
 [[nodiscard]] std::filesystem::path checkpoint_name(int number);
 
+// NNNN of a file named PREFIX-NNNN.h5 (e.g. "checkpoint", "snapshot"), if it is one; temporary
+// files (PREFIX-NNNN.h5.partial-PID) are not.
+[[nodiscard]] std::optional<int> output_number(const std::filesystem::path& file,
+                                               const std::string& prefix);
+
 // The number of a checkpoint file name, if it is one.
-[[nodiscard]] std::optional<int> checkpoint_number(const std::filesystem::path& file);
+[[nodiscard]] inline std::optional<int> checkpoint_number(const std::filesystem::path& file) {
+  return output_number(file, "checkpoint");
+}
 
 // The checkpoints in `folder`, oldest (lowest number) first; temporary files are not listed.
 [[nodiscard]] std::vector<std::filesystem::path> list_checkpoints(

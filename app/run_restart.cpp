@@ -38,10 +38,8 @@ void set_aside_later_outputs(const fs::path& folder, int snapshot_count, int res
   std::vector<fs::path> later;
   std::error_code error;
   for (const auto& entry : fs::directory_iterator(folder, error)) {
-    const std::string name = entry.path().filename().string();
-    int number = -1;
-    if (std::sscanf(name.c_str(), "snapshot-%d.h5", &number) == 1 && number >= snapshot_count &&
-        name.size() > 3 && name.compare(name.size() - 3, 3, ".h5") == 0) {
+    if (const auto number = output_number(entry.path(), "snapshot");
+        number && *number >= snapshot_count) {
       later.push_back(entry.path());
       later.push_back(fs::path(entry.path()).replace_extension(".xmf"));
     } else if (const auto n = checkpoint_number(entry.path()); n && *n > resumed_checkpoint) {

@@ -139,6 +139,18 @@ TEST(Restart, ContinuesBitForBitAndKeepsNumberingTheSnapshots) {
   EXPECT_EQ(inspect.exit_code, 0) << inspect.err;
   EXPECT_NE(inspect.out.find("kind           checkpoint"), std::string::npos) << inspect.out;
   EXPECT_NE(inspect.out.find("snapshot_count        3"), std::string::npos) << inspect.out;
+  // Restarting the older checkpoint again: what the first restart wrote after it is moved aside,
+  // not overwritten, and written anew.
+  const auto again =
+      run_brume("run --restart '" + (folder / "split" / "checkpoint-0000.h5").string() +
+                "' --set clock.max_steps=6 -q");
+  ASSERT_EQ(again.exit_code, 0) << again.err;
+  const fs::path aside = folder / "split" / "superseded-at-step3";
+  for (const char* name : {"snapshot-0002.h5", "snapshot-0002.xmf", "checkpoint-0001.h5"}) {
+    EXPECT_TRUE(fs::exists(aside / name)) << name;
+    EXPECT_TRUE(fs::exists(folder / "split" / name)) << name;
+  }
+  EXPECT_FALSE(fs::exists(aside / "snapshot-0001.h5")) << "the checkpoint's own outputs stay";
   fs::remove_all(folder);
 }
 
