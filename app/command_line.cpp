@@ -21,6 +21,8 @@ const std::vector<SubcommandInfo>& subcommands() {
        "scaling: the same over 1, 2, 4, ... ranks (under mpiexec)"},
       {"inspect", "FILE [--json] [--configuration]",
        "describe a snapshot (fields, units, provenance) and check that it is sound"},
+      {"analyze", "SNAPSHOT [--out FILE] [--set KEY=VALUE]...",
+       "measure a saved snapshot with the run's diagnostics (PDFs, spectra, maps, ...)"},
   };
   return list;
 }

@@ -17,6 +17,7 @@
 #include "io/config/load.hpp"
 #include "io/provenance.hpp"
 #include "io/run_folder.hpp"
+#include "physics/cooling_resolution.hpp"
 
 namespace brume::app {
 
@@ -62,6 +63,9 @@ int run_command(const CommandLine& line, const io::Log& log_in, const MpiSession
   log.copy_to(folder / "run.log");  // rank 0 only: the others do not speak
   log.info("brume: run folder " + folder.string());
   log_ranks(log, mpi, session);
+  if (const auto check = physics::field_length_check(config, largest_cell_edge(session.setup));
+      check && !check->resolved)
+    log.warning(physics::field_length_text(*check));
   session.setup.problem->set_up(setup_context(config, session.setup), session.state);
   session.ghosts->fill(session.state);
   return drive_run(session, folder, log, std::nullopt);

@@ -1,6 +1,8 @@
 #include "app/run_restart.hpp"
 
 #include <filesystem>
+#include <fstream>
+#include <sstream>
 #include <string>
 #include <system_error>
 #include <vector>
@@ -12,6 +14,7 @@
 #include "app/user_error.hpp"
 #include "io/config/load.hpp"
 #include "io/snapshot_reader.hpp"
+#include "io/timeline_table.hpp"
 
 namespace brume::app {
 
@@ -33,8 +36,10 @@ void check_overrides(const std::vector<std::string>& overrides) {
 // Outputs of the earlier run beyond the checkpoint (a later snapshot or checkpoint: the run went
 // on after it, or an older checkpoint is resumed) are moved into a folder of their own, never
 // overwritten. Rank 0.
-void set_aside_later_outputs(const fs::path& folder, int snapshot_count, int resumed_checkpoint,
-                             long step, const io::Log& log) {
+void set_aside_later_outputs(const fs::path& folder, const io::RunRecord& record,
+                             int resumed_checkpoint, long step, const io::Log& log) {
+  const long long snapshot_count = record.integer("snapshot_count");
+  const long long statistics_count = record.integer("statistics_count");
   std::vector<fs::path> later;
   std::error_code error;
   for (const auto& entry : fs::directory_iterator(folder, error)) {
@@ -44,9 +49,25 @@ void set_aside_later_outputs(const fs::path& folder, int snapshot_count, int res
       later.push_back(fs::path(entry.path()).replace_extension(".xmf"));
     } else if (const auto n = checkpoint_number(entry.path()); n && *n > resumed_checkpoint) {
       later.push_back(entry.path());
+    } else if (const auto s = output_number(entry.path(), "statistics");
+               s && *s >= statistics_count) {
+      later.push_back(entry.path());
     }
   }
-  if (later.empty()) return;
+  // The time series goes on from the checkpoint's row: when the earlier run wrote rows after it,
+  // a copy of its table goes aside too (the run then rewrites the table with the rows it keeps).
+  const fs::path timeline = folder / "timeline.txt";
+  bool copy_timeline = false;
+  if (std::ifstream in(timeline); in) {
+    std::stringstream text;
+    text << in.rdbuf();
+    try {
+      copy_timeline = io::read_timeline_text(text.str(), step).dropped_rows;
+    } catch (const std::runtime_error& bad) {
+      throw UserError("--restart: " + timeline.string() + ": " + bad.what());
+    }
+  }
+  if (later.empty() && !copy_timeline) return;
   const fs::path aside = folder / ("superseded-at-step" + std::to_string(step));
   fs::create_directories(aside, error);
   if (error) throw UserError("--restart: cannot create " + aside.string() + ": " + error.message());
@@ -58,6 +79,16 @@ void set_aside_later_outputs(const fs::path& folder, int snapshot_count, int res
                       error.message());
     }
   }
+  if (copy_timeline) {
+    fs::copy_file(timeline, aside / "timeline.txt", error);
+    if (error) {
+      throw UserError("--restart: cannot copy " + timeline.string() + " into " + aside.string() +
+                      ": " + error.message());
+    }
+    log.warning("the time series of the earlier run went on after the checkpoint: a copy is in " +
+                aside.string());
+  }
+  if (later.empty()) return;
   log.warning(std::to_string(later.size()) +
               " files written after the checkpoint by the earlier run moved into " +
               aside.string());
@@ -120,8 +151,7 @@ int restart_run(const CommandLine& line, const io::Log& log_in, const MpiSession
   io::Log log = log_in;
   log.copy_to(folder / "run.log");
   on_rank_zero(session.decomposition->comm(), [&] {
-    set_aside_later_outputs(folder, static_cast<int>(resumed.record.integer("snapshot_count")),
-                            number, state.step, log);
+    set_aside_later_outputs(folder, resumed.record, number, state.step, log);
   });
   log.info("brume: restart from " + file.string() + " at step " + std::to_string(state.step));
   for (const std::string& o : line.overrides)

@@ -1,16 +1,20 @@
 #include "app/run_session.hpp"
 
+#include <algorithm>
+#include <cstdio>
 #include <stdexcept>
 #include <string>
 #include <utility>
 
 #include "app/checkpoint_schedule.hpp"
+#include "app/diagnostics.hpp"
 #include "app/exit_codes.hpp"
 #include "app/on_rank_zero.hpp"
 #include "app/run_loop.hpp"
 #include "app/run_report.hpp"
 #include "app/scheme_choice.hpp"
 #include "app/snapshot_schedule.hpp"
+#include "app/statistics_schedule.hpp"
 #include "app/source_terms.hpp"
 #include "app/stop_signals.hpp"
 #include "app/user_error.hpp"
@@ -51,11 +55,12 @@ RunLimits run_limits(const config::ResolvedConfig& config, const RunSetup& setup
 
 // The run's own state for a checkpoint: the snapshot schedule, the totals at the start of the
 // run (the report's reference) and the counts of floors and fallbacks since then.
-io::RunRecord run_record(const SnapshotSchedule& snapshots, const SplitIntegrator& integrator,
-                         const RunTotals& start, const io::RunRecord& earlier,
-                         const RunSummary& summary) {
+io::RunRecord run_record(const SnapshotSchedule& snapshots, const StatisticsSchedule& statistics,
+                         const SplitIntegrator& integrator, const RunTotals& start,
+                         const io::RunRecord& earlier, const RunSummary& summary) {
   io::RunRecord record;
   snapshots.save(record);
+  statistics.save(record);
   for (const auto& term : integrator.terms())
     term->save(record);
   record.set("initial_mass", start.mass);
@@ -73,6 +78,31 @@ io::RunRecord run_record(const SnapshotSchedule& snapshots, const SplitIntegrato
   return record;
 }
 
+// The floors and fallbacks of the whole run: the earlier invocations' and this one's.
+RunCounters run_counters(const io::RunRecord& earlier, const RunSummary& summary) {
+  auto before = [&](const char* name) {
+    for (const auto& [n, value] : earlier.integers())
+      if (n == name) return value;
+    return 0LL;
+  };
+  return {before("density_floors") + summary.density_floors,
+          before("pressure_floors") + summary.pressure_floors,
+          before("fallback_cells") + summary.fallback_cells};
+}
+
+std::string statistics_report(const StatisticsSchedule& statistics, double run_seconds,
+                              MPI_Comm comm) {
+  double seconds = statistics.wall_seconds();
+  MPI_Allreduce(MPI_IN_PLACE, &seconds, 1, MPI_DOUBLE, MPI_MAX, comm);
+  char line[200];
+  std::snprintf(line, sizeof line,
+                "statistics: %d files, time series and measurements took %.3g s (%.2g %% of the "
+                "run's wall time)",
+                statistics.next_number(), seconds,
+                run_seconds > 0.0 ? 100.0 * seconds / run_seconds : 0.0);
+  return line;
+}
+
 RunTotals recorded_totals(const io::RunRecord& record) {
   RunTotals t;
   t.mass = record.real("initial_mass");
@@ -85,22 +115,20 @@ RunTotals recorded_totals(const io::RunRecord& record) {
 
 }  // namespace
 
-RunSession make_session(config::ResolvedConfig config) {
-  RunSetup setup = make_run_setup(config);
-  const solver::SchemeOptions options = scheme_options(config, setup);
-  const solver::BoxBoundaries boundaries = box_boundaries(config);
+BlockLayout block_layout(const config::ResolvedConfig& config, const RunSetup& setup,
+                         int ghost_layers) {
+  BlockLayout layout;
+  layout.boundaries = box_boundaries(config);
   std::array<bool, 3> periodic{};
   for (int d = 0; d < 3; ++d)
-    periodic[d] = boundaries.lower[d] == solver::BoundaryKind::periodic;
-  const int ghost_layers = solver::required_ghost_layers(options);
+    periodic[d] = layout.boundaries.lower[d] == solver::BoundaryKind::periodic;
   std::array<int, 3> requested_ranks{};
   const auto ranks_key = config.integers3("box.ranks");
   for (int d = 0; d < 3; ++d)
     requested_ranks[d] = static_cast<int>(ranks_key[d]);
   // Every rank finds the same decomposition error: all of them stop with it.
-  std::unique_ptr<solver::Decomposition> decomposition;
   try {
-    decomposition = std::make_unique<solver::Decomposition>(
+    layout.decomposition = std::make_unique<solver::Decomposition>(
         MPI_COMM_WORLD, setup.cells, requested_ranks, periodic, ghost_layers);
   } catch (const solver::DecompositionError& error) {
     throw UserError(config.file_name() + ": " + error.what());
@@ -112,7 +140,17 @@ RunSession make_session(config::ResolvedConfig config) {
       {static_cast<int>(setup.cells[0]), static_cast<int>(setup.cells[1]),
        static_cast<int>(setup.cells[2])},
       setup.lower, upper, ghost_layers);
-  const solver::BlockGeometry geometry = decomposition->block(whole_box);
+  layout.geometry = layout.decomposition->block(whole_box);
+  return layout;
+}
+
+RunSession make_session(config::ResolvedConfig config) {
+  RunSetup setup = make_run_setup(config);
+  const solver::SchemeOptions options = scheme_options(config, setup);
+  BlockLayout layout = block_layout(config, setup, solver::required_ghost_layers(options));
+  const solver::BlockGeometry& geometry = layout.geometry;
+  const solver::BoxBoundaries& boundaries = layout.boundaries;
+  std::unique_ptr<solver::Decomposition> decomposition = std::move(layout.decomposition);
   solver::State state = solver::make_state(geometry, setup.magnetic, setup.isothermal);
   auto ghosts = std::make_shared<solver::HaloExchange>(*decomposition, boundaries, geometry,
                                                        setup.magnetic, setup.isothermal);
@@ -124,7 +162,7 @@ RunSession make_session(config::ResolvedConfig config) {
   }
   auto integrator = std::make_unique<SplitIntegrator>(
       std::move(ideal),
-      make_source_terms(config, source_context(setup, decomposition->comm(), ghosts)), ghosts);
+      make_source_terms(config, run_context(setup, decomposition->comm(), ghosts)), ghosts);
   return {std::move(config),        setup,
           std::move(decomposition), std::move(state),
           std::move(ghosts),        std::move(integrator)};
@@ -148,25 +186,46 @@ int drive_run(RunSession& session, const std::filesystem::path& folder, const io
   CheckpointSchedule checkpoints(folder, info, config.real("output.checkpoint_interval"),
                                  static_cast<int>(config.integer("output.checkpoints_kept")),
                                  resumed ? resumed->next_checkpoint : 0, comm, log);
+  io::StatisticsHeader statistics_header;
+  statistics_header.time_to_cgs = setup.code_units.time();
+  statistics_header.source = folder.string();
+  statistics_header.configuration = info.configuration;
+  StatisticsSchedule statistics(
+      folder, make_diagnostics(config, run_context(setup, comm, session.ghosts)),
+      run_context(setup, comm, session.ghosts), statistics_header,
+      config.real("statistics.interval") / setup.code_units.time(),
+      config.integer("statistics.timeline_every"), limits.time_unit, log);
   const io::RunRecord earlier = resumed ? resumed->record : io::RunRecord{};
   RunTotals start;
   SplitIntegrator& integrator = *session.integrator;
   if (resumed) {
     snapshots.restore(resumed->record, state);
+    statistics.restore(resumed->record, state);
     for (const auto& term : integrator.terms())
       term->restore(resumed->record);
     start = recorded_totals(resumed->record);
   } else {
     snapshots.write(state, "initial");
     start = totals(state, comm);
+    statistics.timeline_row(state, 0.0, integrator, {});
+    statistics.measure(state, true);
   }
   const StopSignals signals;
   RunHooks hooks;
-  hooks.next_output = [&] { return snapshots.next_time(); };
+  hooks.next_output = [&] { return std::min(snapshots.next_time(), statistics.next_time()); };
+  double previous_time = state.time;
   hooks.after_step = [&](const solver::State& s, const RunSummary& so_far, double wall) {
+    const int snapshots_before = snapshots.next_number();
     snapshots.after_step(s);
-    if (checkpoints.due(wall))
-      checkpoints.write(s, run_record(snapshots, integrator, start, earlier, so_far), wall);
+    if (statistics.follows_snapshots() && snapshots.next_number() != snapshots_before)
+      statistics.measure(s, false);
+    statistics.after_step(s, s.time - previous_time, integrator, run_counters(earlier, so_far));
+    previous_time = s.time;
+    if (checkpoints.due(wall)) {
+      statistics.write_timeline_hdf5();
+      checkpoints.write(s, run_record(snapshots, statistics, integrator, start, earlier, so_far),
+                        wall);
+    }
   };
   hooks.stop_request = [] { return StopSignals::received(); };
   const RunSummary summary =
@@ -179,14 +238,22 @@ int drive_run(RunSession& session, const std::filesystem::path& folder, const io
     snapshots.write_failure(state);
   } else {
     // A run that stopped early is not finished: it gets a checkpoint, not a final snapshot.
-    if (!early && state.time > 0.0) snapshots.write(state, "final");
-    checkpoints.write(state, run_record(snapshots, integrator, start, earlier, summary),
-                      summary.wall_seconds);
+    if (!early && state.time > 0.0) {
+      snapshots.write(state, "final");
+      statistics.timeline_row(state, state.time - previous_time, integrator,
+                              run_counters(earlier, summary));
+      statistics.measure(state, true);
+    }
+    checkpoints.write(
+        state, run_record(snapshots, statistics, integrator, start, earlier, summary),
+        summary.wall_seconds);
   }
+  statistics.write_timeline_hdf5();
   std::string report = run_report(summary, start, totals(state, comm), state, limits);
   for (const auto& term : integrator.terms()) {
     if (const std::string line = term->report(); !line.empty()) report += "\n  " + line;
   }
+  report += "\n  " + statistics_report(statistics, summary.wall_seconds, comm);
   log.info(report);
   on_rank_zero(comm, [&] { io::write_file_atomically(folder / "summary.txt", report + "\n"); });
   if (failed) return exit_numerical_failure;

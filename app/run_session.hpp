@@ -13,6 +13,7 @@
 #include "io/config/resolved.hpp"
 #include "io/log.hpp"
 #include "io/run_record.hpp"
+#include "solver/box_boundaries.hpp"
 #include "solver/decomposition.hpp"
 #include "solver/halo_exchange.hpp"
 #include "solver/integrator.hpp"
@@ -28,6 +29,16 @@ struct RunSession {
   std::shared_ptr<solver::HaloExchange> ghosts;
   std::unique_ptr<SplitIntegrator> integrator;  // the ideal step with the source terms
 };
+
+// The decomposition of the box over the ranks and this rank's block. Collective. Throws UserError
+// for a box that does not divide over the ranks.
+struct BlockLayout {
+  std::unique_ptr<solver::Decomposition> decomposition;
+  solver::BlockGeometry geometry;
+  solver::BoxBoundaries boundaries;
+};
+[[nodiscard]] BlockLayout block_layout(const config::ResolvedConfig& config, const RunSetup& setup,
+                                       int ghost_layers);
 
 // Collective. Throws UserError for a box that does not divide over the ranks or impossible
 // scheme options.

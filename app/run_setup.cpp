@@ -7,6 +7,7 @@
 #include <cstdio>
 
 #include "app/scheme_choice.hpp"
+#include "physics/cooling_resolution.hpp"
 #include "physics/cooling_summary.hpp"
 #include "solver/box_boundaries.hpp"
 #include "solver/units/constants.hpp"
@@ -41,6 +42,13 @@ problems::SetupContext setup_context(const config::ResolvedConfig& config, const
   return {config,      setup.code_units,  setup.mean_molecular_weight,
           setup.gamma, setup.sound_speed, setup.lower,
           setup.size,  setup.cells};
+}
+
+double largest_cell_edge(const RunSetup& setup) {
+  double edge = 0.0;
+  for (int d = 0; d < 3; ++d)
+    edge = std::max(edge, setup.size[d] / static_cast<double>(setup.cells[d]));
+  return edge * setup.code_units.length;
 }
 
 namespace {
@@ -153,6 +161,8 @@ std::vector<std::pair<std::string, std::string>> derived_quantities(
   if (config.flag("cooling.enabled") && !s.isothermal) {
     for (auto& line : physics::cooling_summary(physics::cooling_settings(config), s.gamma))
       lines.push_back(std::move(line));
+    if (const auto check = physics::field_length_check(config, largest_cell_edge(s)))
+      add("cooling: resolution", physics::field_length_text(*check));
   }
   return lines;
 }

@@ -30,6 +30,9 @@ struct RunSetup {
 [[nodiscard]] problems::SetupContext setup_context(const config::ResolvedConfig& config,
                                                    const RunSetup& setup);
 
+// The longest cell edge, cm.
+[[nodiscard]] double largest_cell_edge(const RunSetup& setup);
+
 // Derived quantities as (name, value with unit) lines for `brume check`.
 [[nodiscard]] std::vector<std::pair<std::string, std::string>> derived_quantities(
     const config::ResolvedConfig& config, const RunSetup& setup);

@@ -1,8 +1,10 @@
 #include "app/schema.hpp"
 
+#include "app/diagnostics.hpp"
 #include "io/config/core_sections.hpp"
 #include "physics/cooling_settings.hpp"
 #include "physics/diffusion_section.hpp"
+#include "physics/phase_boundaries.hpp"
 #include "physics/stirring_settings.hpp"
 #include "problems/problem.hpp"
 
@@ -15,6 +17,8 @@ const config::Schema& brume_schema() {
       {physics::stirring_section()},
       {physics::cooling_section()},
       {physics::diffusion_section()},
+      {statistics_section()},
+      {physics::phases_section()},
   });
   return schema;
 }

@@ -9,9 +9,9 @@
 
 namespace brume::app {
 
-physics::SourceContext source_context(const RunSetup& setup, MPI_Comm comm,
+physics::RunContext run_context(const RunSetup& setup, MPI_Comm comm,
                                       std::shared_ptr<const solver::GhostFiller> ghosts) {
-  physics::SourceContext c;
+  physics::RunContext c;
   c.code_units = setup.code_units;
   c.gamma = setup.gamma;
   c.sound_speed = setup.sound_speed;
@@ -27,7 +27,7 @@ physics::SourceContext source_context(const RunSetup& setup, MPI_Comm comm,
 }
 
 std::vector<std::unique_ptr<physics::SourceTerm>> make_source_terms(
-    const config::ResolvedConfig& config, const physics::SourceContext& context) {
+    const config::ResolvedConfig& config, const physics::RunContext& context) {
   std::vector<std::unique_ptr<physics::SourceTerm>> terms;
   // Each module adds its term here when its section asks for it, in the order of the first
   // half step (the header says which).

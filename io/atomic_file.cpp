@@ -46,4 +46,11 @@ void write_file_atomically(const std::filesystem::path& path, std::string_view t
   if (::rename(temporary.c_str(), path.c_str()) != 0) fail(path, "rename", errno, temporary);
 }
 
+bool flush_to_disk(const std::string& path) {
+  const int fd = ::open(path.c_str(), O_RDONLY | O_CLOEXEC);
+  if (fd < 0) return false;
+  const bool ok = ::fsync(fd) == 0;
+  return ::close(fd) == 0 && ok;
+}
+
 }  // namespace brume::io

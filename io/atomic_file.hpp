@@ -3,6 +3,7 @@
 #pragma once
 
 #include <filesystem>
+#include <string>
 #include <string_view>
 
 namespace brume::io {
@@ -10,5 +11,9 @@ namespace brume::io {
 // Throws std::runtime_error (with the path and the system's reason) when any step fails; the
 // temporary file is removed then, and an existing file of the final name is left untouched.
 void write_file_atomically(const std::filesystem::path& path, std::string_view text);
+
+// fsyncs a closed file, so that a rename never publishes data still in the page cache; false when
+// the file cannot be opened or the flush fails.
+[[nodiscard]] bool flush_to_disk(const std::string& path);
 
 }  // namespace brume::io

@@ -1,12 +1,12 @@
 #include "io/snapshot.hpp"
 
-#include <fcntl.h>
 #include <unistd.h>
 
 #include <cstdio>
 #include <stdexcept>
 #include <vector>
 
+#include "io/atomic_file.hpp"
 #include "io/block_selection.hpp"
 #include "io/chunk_shape.hpp"
 #include "io/hdf5_handles.hpp"
@@ -98,14 +98,6 @@ void write_file(const std::string& path, const solver::State& state, const Snaps
   if (!file.close()) throw std::runtime_error("HDF5: closing " + path + " failed");
 }
 
-// fsync the closed file, so that the rename never publishes data still in the page cache.
-bool flushed_to_disk(const std::string& path) {
-  const int fd = ::open(path.c_str(), O_RDONLY | O_CLOEXEC);
-  if (fd < 0) return false;
-  const bool ok = ::fsync(fd) == 0;
-  return ::close(fd) == 0 && ok;
-}
-
 }  // namespace
 
 void write_snapshot(const std::filesystem::path& file, const solver::State& state,
@@ -128,7 +120,7 @@ void write_snapshot(const std::filesystem::path& file, const solver::State& stat
   int any_failed = 0;
   MPI_Allreduce(&failed, &any_failed, 1, MPI_INT, MPI_MAX, comm);
   if (rank == 0) {
-    if (any_failed == 0 && !flushed_to_disk(temporary)) {
+    if (any_failed == 0 && !flush_to_disk(temporary)) {
       any_failed = 1;
       reason = "flushing " + temporary + " to disk failed";
     }

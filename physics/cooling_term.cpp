@@ -13,7 +13,7 @@ namespace brume::physics {
 
 namespace cgs = units::cgs;
 
-CoolingTerm::CoolingTerm(CoolingSettings settings, SourceContext context)
+CoolingTerm::CoolingTerm(CoolingSettings settings, RunContext context)
     : settings_(std::move(settings)), context_(std::move(context)) {
   if (context_.isothermal) {
     throw config::Error("", 0, 0, "cooling.enabled",
@@ -106,11 +106,33 @@ double CoolingTerm::time_step_limit(const solver::State& state) const {
   return fraction * shortest / context_.code_units.time();
 }
 
+double CoolingTerm::radiated() const {
+  solver::ExactSum radiated = radiated_;
+  radiated.combine(context_.comm);
+  return radiated.value();
+}
+
+std::vector<io::MeasuredNumber> CoolingTerm::budget() const {
+  return {{"radiated_energy", radiated(), "erg", 1.0,
+           "Net energy radiated by the gas (cooling minus heating) since the start of the run"}};
+}
+
+void CoolingTerm::save(io::RunRecord& record) const {
+  record.set("cooling.radiated", radiated());
+}
+
+void CoolingTerm::restore(const io::RunRecord& record) {
+  // Held once, by rank 0, so that the combined sum counts it once.
+  radiated_ = solver::ExactSum{};
+  int rank = 0;
+  MPI_Comm_rank(context_.comm, &rank);
+  if (rank == 0) radiated_.add(record.real("cooling.radiated"));
+}
+
 std::string CoolingTerm::report() const {
   long long counts[4] = {cell_updates_, substeps_, limited_cells_, fast_path_cells_};
   MPI_Allreduce(MPI_IN_PLACE, counts, 4, MPI_LONG_LONG, MPI_SUM, context_.comm);
-  solver::ExactSum radiated = radiated_;
-  radiated.combine(context_.comm);
+  const double radiated_total = radiated();
   char text[320];
   std::snprintf(text, sizeof text,
                 "cooling: %lld cell updates (%.4g %% by Rosenbrock steps), %.3g sub-steps per "
@@ -118,7 +140,7 @@ std::string CoolingTerm::report() const {
                 "%.6g erg",
                 counts[0], counts[0] > 0 ? 100.0 * double(counts[3]) / double(counts[0]) : 0.0,
                 counts[0] > 0 ? double(counts[1]) / double(counts[0]) : 0.0, counts[2],
-                radiated.value());
+                radiated_total);
   return text;
 }
 

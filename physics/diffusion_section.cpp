@@ -86,7 +86,7 @@ bool diffusion_requested(const config::ResolvedConfig& config) {
 }
 
 DiffusionCoefficients diffusion_coefficients(const config::ResolvedConfig& config,
-                                             const SourceContext& context) {
+                                             const RunContext& context) {
   const units::CodeUnits& u = context.code_units;
   const double temperature_unit = u.temperature(context.mean_molecular_weight);
   // A flux κ ∂T/∂x (erg cm⁻² s⁻¹) with T = θ T_u and x = x' L_u is κ T_u / L_u ∂θ/∂x', in code

@@ -5,7 +5,7 @@
 #include "io/config/resolved.hpp"
 #include "io/config/section.hpp"
 #include "physics/diffusion_coefficients.hpp"
-#include "physics/source_context.hpp"
+#include "physics/run_context.hpp"
 
 namespace brume::physics {
 
@@ -16,7 +16,7 @@ namespace brume::physics {
 
 // The coefficients of the section in code units of `context`.
 [[nodiscard]] DiffusionCoefficients diffusion_coefficients(const config::ResolvedConfig& config,
-                                                           const SourceContext& context);
+                                                           const RunContext& context);
 
 [[nodiscard]] int diffusion_max_stages(const config::ResolvedConfig& config);
 

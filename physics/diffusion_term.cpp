@@ -69,7 +69,7 @@ void for_each_evolved(S& a, S& b, F&& f) {
 }  // namespace
 
 DiffusionTerm::DiffusionTerm(const DiffusionCoefficients& coefficients, int max_stages,
-                             SourceContext context)
+                             RunContext context)
     : coefficients_(coefficients),
       max_stages_(std::max(max_stages, 2)),
       context_(std::move(context)) {}

@@ -9,7 +9,7 @@
 
 #include "physics/diffusion_coefficients.hpp"
 #include "physics/diffusion_operator.hpp"
-#include "physics/source_context.hpp"
+#include "physics/run_context.hpp"
 #include "physics/source_term.hpp"
 
 namespace brume::physics {
@@ -23,7 +23,7 @@ struct DiffusionCall {
 
 class DiffusionTerm final : public SourceTerm {
  public:
-  DiffusionTerm(const DiffusionCoefficients& coefficients, int max_stages, SourceContext context);
+  DiffusionTerm(const DiffusionCoefficients& coefficients, int max_stages, RunContext context);
 
   [[nodiscard]] std::string name() const override { return "diffusion"; }
   // Collective: fills ghosts through the context before every stage and takes the global
@@ -39,7 +39,7 @@ class DiffusionTerm final : public SourceTerm {
 
   DiffusionCoefficients coefficients_;
   int max_stages_;
-  SourceContext context_;
+  RunContext context_;
   std::unique_ptr<DiffusionOperator> operator_;
   // RKL2 scratch: Y_0, Y_{j−1}, Y_{j−2}, L(Y_0) and L(Y_{j−1}); allocated on the first call.
   solver::State y0_, previous_, before_, rate0_, rate_;

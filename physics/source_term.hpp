@@ -6,7 +6,9 @@
 
 #include <limits>
 #include <string>
+#include <vector>
 
+#include "io/measurement.hpp"
 #include "io/run_record.hpp"
 #include "solver/state.hpp"
 
@@ -36,6 +38,10 @@ class SourceTerm {
   // amplitudes, energy accumulators), under names that start with name() + ".".
   virtual void save(io::RunRecord& record) const { (void)record; }
   virtual void restore(const io::RunRecord& record) { (void)record; }
+
+  // The term's running energy totals since the start of the run (work done, energy radiated), in
+  // erg, for the time series. Collective.
+  [[nodiscard]] virtual std::vector<io::MeasuredNumber> budget() const { return {}; }
 
   // One line for the run summary (energy injected, cells limited, ...); empty for none.
   [[nodiscard]] virtual std::string report() const { return {}; }

@@ -27,7 +27,7 @@ double combined(BlockSum& block, MPI_Comm comm) {
   return sum.value();
 }
 
-StirringProcess make_process(const StirringSettings& settings, const SourceContext& context,
+StirringProcess make_process(const StirringSettings& settings, const RunContext& context,
                              const StirringScales& scales) {
   const std::array<bool, 3> active{context.box_cells[0] > 1, context.box_cells[1] > 1,
                                    context.box_cells[2] > 1};
@@ -44,7 +44,7 @@ StirringProcess make_process(const StirringSettings& settings, const SourceConte
 
 }  // namespace
 
-StirringTerm::StirringTerm(const StirringSettings& settings, const SourceContext& context)
+StirringTerm::StirringTerm(const StirringSettings& settings, const RunContext& context)
     : context_(context),
       scales_(stirring_scales(settings, context.box_size)),
       process_(make_process(settings, context, scales_)) {}
@@ -125,6 +125,11 @@ void StirringTerm::restore(const io::RunRecord& record) {
   if (rank == 0) work_.add(record.real("forcing.work"));
 }
 
+std::vector<io::MeasuredNumber> StirringTerm::budget() const {
+  return {{"stirring_work", work() * context_.code_units.energy(), "erg", 1.0,
+           "Work done by the stirring on the gas since the start of the run"}};
+}
+
 std::string StirringTerm::report() const {
   const double w = work();
   const units::CodeUnits& u = context_.code_units;
@@ -140,7 +145,7 @@ std::string StirringTerm::report() const {
 }
 
 std::unique_ptr<SourceTerm> make_stirring_term(const config::ResolvedConfig& config,
-                                               const SourceContext& context) {
+                                               const RunContext& context) {
   return std::make_unique<StirringTerm>(stirring_settings(config, context.code_units), context);
 }
 

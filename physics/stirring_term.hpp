@@ -8,7 +8,7 @@
 #include <optional>
 #include <string>
 
-#include "physics/source_context.hpp"
+#include "physics/run_context.hpp"
 #include "physics/source_term.hpp"
 #include "physics/stirring_block_sum.hpp"
 #include "physics/stirring_field.hpp"
@@ -21,13 +21,14 @@ class StirringTerm final : public SourceTerm {
  public:
   // The amplitudes start from the stationary distribution; the phase tables of the block are
   // built on the first advance, from the state's geometry.
-  StirringTerm(const StirringSettings& settings, const SourceContext& context);
+  StirringTerm(const StirringSettings& settings, const RunContext& context);
 
   [[nodiscard]] std::string name() const override { return "forcing"; }
   void advance(solver::State& state, double dt) override;
   void save(io::RunRecord& record) const override;
   void restore(const io::RunRecord& record) override;
   [[nodiscard]] std::string report() const override;
+  [[nodiscard]] std::vector<io::MeasuredNumber> budget() const override;
 
   // Collective: the work done on the whole box since the start of the run (code units of
   // energy), and the time over which the stirring acted.
@@ -44,7 +45,7 @@ class StirringTerm final : public SourceTerm {
   [[nodiscard]] const std::array<double, 3>& removed_mean() const { return removed_mean_; }
 
  private:
-  SourceContext context_;
+  RunContext context_;
   StirringScales scales_;
   StirringProcess process_;
   std::optional<StirringField> field_;
@@ -55,6 +56,6 @@ class StirringTerm final : public SourceTerm {
 
 // The term for a run's configuration and block.
 [[nodiscard]] std::unique_ptr<SourceTerm> make_stirring_term(const config::ResolvedConfig& config,
-                                                             const SourceContext& context);
+                                                             const RunContext& context);
 
 }  // namespace brume::physics

@@ -4,31 +4,9 @@
 #include <numbers>
 #include <random>
 
+#include "problems/random_deviates.hpp"
+
 namespace brume::problems {
-
-namespace {
-
-// A uniform deviate in (0, 1) from the generator's raw 53 bits: fully specified by the standard, so
-// the same seed gives the same field with any standard library.
-double uniform(std::mt19937_64& generator) {
-  return (static_cast<double>(generator() >> 11) + 0.5) * 0x1.0p-53;
-}
-
-// Box–Muller transform (Box & Muller 1958, Ann. Math. Statist. 29, 610).
-double gaussian(std::mt19937_64& generator) {
-  const double u1 = uniform(generator);
-  const double u2 = uniform(generator);
-  return std::sqrt(-2.0 * std::log(u1)) * std::cos(2.0 * std::numbers::pi * u2);
-}
-
-// One of each ±k pair: the first non-zero component is positive.
-bool upper_half(const std::array<int, 3>& k) {
-  if (k[0] != 0) return k[0] > 0;
-  if (k[1] != 0) return k[1] > 0;
-  return k[2] > 0;
-}
-
-}  // namespace
 
 RandomSolenoidalField::RandomSolenoidalField(std::array<double, 3> box_size,
                                              std::array<bool, 3> active, int lowest, int highest,
@@ -52,11 +30,12 @@ RandomSolenoidalField::RandomSolenoidalField(std::array<double, 3> box_size,
           kv[d] = k[d] / box_size[d];
           kv2 += kv[d] * kv[d];
         }
-        std::array<double, 3> a{gaussian(generator), gaussian(generator), gaussian(generator)};
+        std::array<double, 3> a{gaussian_deviate(generator), gaussian_deviate(generator),
+                                gaussian_deviate(generator)};
         const double along = (a[0] * kv[0] + a[1] * kv[1] + a[2] * kv[2]) / kv2;
         for (int d = 0; d < 3; ++d)
           a[d] -= along * kv[d];
-        const double phase = 2.0 * std::numbers::pi * uniform(generator);
+        const double phase = 2.0 * std::numbers::pi * uniform_deviate(generator);
         modes_.push_back({k, a, phase});
         // ⟨sin²⟩ = 1/2 over the box for every mode, and distinct modes are orthogonal.
         mean_square += 0.5 * (a[0] * a[0] + a[1] * a[1] + a[2] * a[2]);

@@ -27,8 +27,8 @@ config::ResolvedConfig load(const std::vector<std::string>& overrides) {
   return config::load(brume_schema(), kInput, overrides);
 }
 
-physics::SourceContext context_of(const RunSetup& setup) {
-  return source_context(setup, MPI_COMM_WORLD,
+physics::RunContext context_of(const RunSetup& setup) {
+  return run_context(setup, MPI_COMM_WORLD,
                         std::make_shared<solver::BoxGhostFiller>(solver::BoxBoundaries{}));
 }
 
@@ -66,7 +66,7 @@ TEST(DiffusionConfig, ConductivityInCodeUnitsGivesTheThermalDiffusivity) {
     const config::ResolvedConfig config =
         load({"diffusion.conduction=" + law, "diffusion.conductivity=4e7 erg s^-1 cm^-1 K^-1"});
     const RunSetup setup = make_run_setup(config);
-    const physics::SourceContext context = context_of(setup);
+    const physics::RunContext context = context_of(setup);
     const physics::DiffusionCoefficients k = physics::diffusion_coefficients(config, context);
     const double temperature = 8000.0;  // K
     const double theta = temperature / setup.code_units.temperature(setup.mean_molecular_weight);

@@ -40,7 +40,7 @@ DiffusedRun run_on(int ranks, const std::array<int, 3>& per_axis) {
   const MPI_Comm comm = run.decomposition->comm();
   app::SplitIntegrator integrator(
       std::move(run.integrator),
-      app::make_source_terms(run.config, app::source_context(run.setup, comm, run.ghosts)),
+      app::make_source_terms(run.config, app::run_context(run.setup, comm, run.ghosts)),
       run.ghosts);
   app::RunLimits limits;
   limits.stop_time = run.config.real("clock.stop_time") / run.setup.code_units.time();

@@ -28,7 +28,7 @@ struct Result {
 std::unique_ptr<physics::StirringTerm> stirring(const DecomposedRun& run) {
   return std::make_unique<physics::StirringTerm>(
       physics::stirring_settings(run.config, run.setup.code_units),
-      app::source_context(run.setup, run.decomposition->comm(), run.ghosts));
+      app::run_context(run.setup, run.decomposition->comm(), run.ghosts));
 }
 
 // One kick of the stirring on the initial state (gas at rest): the momenta are ρ (a − ā) dt.

@@ -19,8 +19,8 @@ namespace cgs = units::cgs;
 constexpr double mu = 1.27;
 const KoyamaInutsukaFit fit;
 
-SourceContext context() {
-  SourceContext c;
+RunContext context() {
+  RunContext c;
   c.code_units = units::code_units_from_number_density(cgs::parsec, cgs::kilometre, 1.0, mu);
   c.mean_molecular_weight = mu;
   c.gamma = 5.0 / 3.0;
@@ -28,7 +28,7 @@ SourceContext context() {
 }
 
 // 4 × 3 × 2 cells of different densities, temperatures, velocities and fields.
-solver::State varied_state(const SourceContext& c, const std::vector<double>& temperatures) {
+solver::State varied_state(const RunContext& c, const std::vector<double>& temperatures) {
   const auto g = solver::whole_box_geometry({4, 3, 2}, {0, 0, 0}, {1, 1, 1}, 2);
   solver::State s = solver::make_state(g, true, false);
   for (std::size_t f = 0; f < s.face_field[0].size(); ++f) {
@@ -70,7 +70,7 @@ double thermal(const solver::State& s, std::size_t u) {
 }
 
 TEST(CoolingTerm, ChangesOnlyTheThermalEnergyAsTheCellIntegratorSays) {
-  const SourceContext c = context();
+  const RunContext c = context();
   solver::State s = varied_state(c, {30.0, 900.0, 5000.0, 2e4});
   const solver::State before = s;
   CoolingSettings settings;
@@ -107,7 +107,7 @@ TEST(CoolingTerm, ChangesOnlyTheThermalEnergyAsTheCellIntegratorSays) {
 }
 
 TEST(CoolingTerm, StiffStepLeavesFiniteTemperaturesAtEquilibrium) {
-  const SourceContext c = context();
+  const RunContext c = context();
   solver::State s = varied_state(c, {10.0, 50.0, 8000.0, 1e7});
   CoolingSettings settings;
   CoolingTerm term(settings, c);
@@ -137,7 +137,7 @@ TEST(CoolingTerm, StiffStepLeavesFiniteTemperaturesAtEquilibrium) {
 }
 
 TEST(CoolingTerm, TimeStepLimitIsTheFractionOfTheShortestCoolingTime) {
-  const SourceContext c = context();
+  const RunContext c = context();
   const solver::State s = varied_state(c, {300.0, 8000.0});
   CoolingSettings settings;
   EXPECT_TRUE(std::isinf(CoolingTerm(settings, c).time_step_limit(s)));
@@ -159,7 +159,7 @@ TEST(CoolingTerm, TimeStepLimitIsTheFractionOfTheShortestCoolingTime) {
 }
 
 TEST(CoolingTerm, IsothermalGasIsRefused) {
-  SourceContext c = context();
+  RunContext c = context();
   c.isothermal = true;
   EXPECT_THROW(CoolingTerm(CoolingSettings{}, c), config::Error);
 }

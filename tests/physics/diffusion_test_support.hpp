@@ -19,7 +19,7 @@ inline constexpr double kGamma = 5.0 / 3.0;
 // A diffusion term on a single periodic block (code units equal to cgs: the coefficients are
 // given in code units directly).
 inline DiffusionTerm make_box_term(const DiffusionCoefficients& coefficients, int max_stages = 64) {
-  SourceContext context;
+  RunContext context;
   context.gamma = coefficients.gamma;
   context.ghosts = std::make_shared<solver::BoxGhostFiller>(solver::BoxBoundaries{});
   return DiffusionTerm(coefficients, max_stages, context);

@@ -25,8 +25,8 @@ StirringSettings settings(double zeta) {
   return s;
 }
 
-SourceContext context(const std::array<long, 3>& cells, const std::array<double, 3>& size) {
-  SourceContext c;
+RunContext context(const std::array<long, 3>& cells, const std::array<double, 3>& size) {
+  RunContext c;
   c.box_cells = cells;
   c.box_size = size;
   c.comm = MPI_COMM_SELF;

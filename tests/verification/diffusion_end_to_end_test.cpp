@@ -90,7 +90,7 @@ Decay run_decay(Equilibrium e) {
   auto ghosts = std::make_shared<solver::BoxGhostFiller>(app::box_boundaries(run.config));
   ghosts->fill(run.state);
   auto terms =
-      app::make_source_terms(run.config, app::source_context(run.setup, MPI_COMM_WORLD, ghosts));
+      app::make_source_terms(run.config, app::run_context(run.setup, MPI_COMM_WORLD, ghosts));
   const auto* term = dynamic_cast<const physics::DiffusionTerm*>(terms.at(0).get());
   run.integrator =
       std::make_unique<app::SplitIntegrator>(std::move(run.integrator), std::move(terms), ghosts);

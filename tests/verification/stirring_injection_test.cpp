@@ -72,7 +72,7 @@ InjectionRun run_seed(int seed) {
   setup.problem->set_up(app::setup_context(config, setup), state);
   auto ghosts = std::make_shared<solver::BoxGhostFiller>(app::box_boundaries(config));
   ghosts->fill(state);
-  auto terms = app::make_source_terms(config, app::source_context(setup, MPI_COMM_SELF, ghosts));
+  auto terms = app::make_source_terms(config, app::run_context(setup, MPI_COMM_SELF, ghosts));
   EXPECT_EQ(terms.size(), 1u);
   const auto* stirring = dynamic_cast<const physics::StirringTerm*>(terms.at(0).get());
   EXPECT_NE(stirring, nullptr);

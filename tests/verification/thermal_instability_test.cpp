@@ -108,7 +108,7 @@ Growth run_mode(const std::vector<std::string>& overrides, double t_first_myr, d
   auto ghosts = std::make_shared<solver::BoxGhostFiller>(app::box_boundaries(run.config));
   run.integrator = std::make_unique<app::SplitIntegrator>(
       std::move(run.integrator),
-      app::make_source_terms(run.config, app::source_context(run.setup, MPI_COMM_WORLD, ghosts)),
+      app::make_source_terms(run.config, app::run_context(run.setup, MPI_COMM_WORLD, ghosts)),
       ghosts);
   const physics::CoolingSettings cooling = physics::cooling_settings(run.config);
   const double n = run.config.real("problem.thermal_instability.density");

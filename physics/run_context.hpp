@@ -1,5 +1,6 @@
-// What every operator split from the ideal-MHD step may need to know about the run: units, gas,
-// the whole box (for global coordinates), the communicator and the ghost filler of this block.
+// What every operator split from the ideal-MHD step, and every diagnostic, may need to know about
+// the run: units, gas, the whole box (for global coordinates), the communicator and the ghost
+// filler.
 #pragma once
 
 #include <mpi.h>
@@ -12,7 +13,7 @@
 
 namespace brume::physics {
 
-struct SourceContext {
+struct RunContext {
   units::CodeUnits code_units;
   double gamma = 5.0 / 3.0;            // ideal gas
   double sound_speed = 1.0;            // isothermal gas, code units

@@ -1,0 +1,49 @@
+#include "problems/random_scalar_field.hpp"
+
+#include <cmath>
+#include <numbers>
+#include <random>
+
+#include "problems/random_deviates.hpp"
+
+namespace brume::problems {
+
+RandomScalarField::RandomScalarField(std::array<double, 3> box_size, std::array<bool, 3> active,
+                                     int lowest, int highest, double rms, std::uint64_t seed)
+    : box_size_(box_size) {
+  std::mt19937_64 generator(seed);
+  std::array<int, 3> reach{};
+  for (int d = 0; d < 3; ++d)
+    reach[d] = active[d] ? highest : 0;
+  double mean_square = 0.0;
+  for (int kx = -reach[0]; kx <= reach[0]; ++kx) {
+    for (int ky = -reach[1]; ky <= reach[1]; ++ky) {
+      for (int kz = -reach[2]; kz <= reach[2]; ++kz) {
+        const std::array<int, 3> k{kx, ky, kz};
+        const int k2 = kx * kx + ky * ky + kz * kz;
+        if (k2 < lowest * lowest || k2 > highest * highest || !upper_half(k)) continue;
+        const double a = gaussian_deviate(generator);
+        modes_.push_back({k, a, 2.0 * std::numbers::pi * uniform_deviate(generator)});
+        mean_square += 0.5 * a * a;  // ⟨cos²⟩ = 1/2; distinct modes are orthogonal
+      }
+    }
+  }
+  const double scale = mean_square > 0.0 ? rms / std::sqrt(mean_square) : 0.0;
+  for (Mode& mode : modes_)
+    mode.amplitude *= scale;
+}
+
+double RandomScalarField::operator()(double x, double y, double z) const {
+  double f = 0.0;
+  for (const Mode& mode : modes_) {
+    const double argument =
+        2.0 * std::numbers::pi *
+            (mode.wave_number[0] * x / box_size_[0] + mode.wave_number[1] * y / box_size_[1] +
+             mode.wave_number[2] * z / box_size_[2]) +
+        mode.phase;
+    f += mode.amplitude * std::cos(argument);
+  }
+  return f;
+}
+
+}  // namespace brume::problems
