@@ -1,7 +1,12 @@
 #include "app/diagnostics.hpp"
 
 #include "physics/box_overview.hpp"
+#include "physics/distributions_diagnostic.hpp"
+#include "physics/jeans_diagnostic.hpp"
 #include "physics/phase_boundaries.hpp"
+#include "physics/sky_maps.hpp"
+#include "physics/spectra_diagnostic.hpp"
+#include "physics/structure_functions.hpp"
 #include "solver/units/dimension.hpp"
 
 namespace brume::app {
@@ -31,6 +36,16 @@ std::vector<ScheduledDiagnostic> make_diagnostics(const config::ResolvedConfig& 
   std::vector<ScheduledDiagnostic> list;
   list.push_back({std::make_unique<physics::BoxOverview>(physics::phase_boundaries(config)), 1});
   // Each diagnostic family adds itself here when its section enables it.
+  if (config.flag("sky_maps.enabled"))
+    list.push_back({physics::make_sky_maps(config, context), config.integer("sky_maps.every")});
+  if (auto d = physics::make_distributions(config, context))
+    list.push_back({std::move(d), config.integer("distributions.every")});
+  if (auto d = physics::make_jeans(config, context))
+    list.push_back({std::move(d), config.integer("jeans.every")});
+  if (auto d = physics::make_structure_functions(config, context))
+    list.push_back({std::move(d), config.integer("structure_functions.every")});
+  if (auto d = physics::make_spectra(config, context))
+    list.push_back({std::move(d), config.integer("spectra.every")});
   (void)context;
   return list;
 }

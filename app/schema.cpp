@@ -4,8 +4,13 @@
 #include "io/config/core_sections.hpp"
 #include "physics/cooling_settings.hpp"
 #include "physics/diffusion_section.hpp"
+#include "physics/distributions_settings.hpp"
+#include "physics/jeans_settings.hpp"
 #include "physics/phase_boundaries.hpp"
+#include "physics/sky_settings.hpp"
+#include "physics/spectra_settings.hpp"
 #include "physics/stirring_settings.hpp"
+#include "physics/structure_settings.hpp"
 #include "problems/problem.hpp"
 
 namespace brume::app {
@@ -19,6 +24,10 @@ const config::Schema& brume_schema() {
       {physics::diffusion_section()},
       {statistics_section()},
       {physics::phases_section()},
+      {physics::sky_maps_section()},
+      {physics::distributions_section(), physics::jeans_section()},
+      {physics::structure_functions_section()},
+      {physics::spectra_section()},
   });
   return schema;
 }
