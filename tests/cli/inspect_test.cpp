@@ -101,7 +101,7 @@ TEST(Inspect, TheResolvedConfigurationOnRequest) {
   const auto r = run_brume("inspect '" + file.string() + "' --configuration");
   ASSERT_EQ(r.exit_code, 0) << r.err;
   expect_contains(r.out, {"# resolved configuration stored in snapshot-0001.h5",
-                          "problem:", "name: decaying_turbulence", "cells: [8, 8, 8]"});
+                          "problem:", "name: driven_turbulence", "cells: [8, 8, 8]"});
   fs::remove_all(folder);
 }
 
