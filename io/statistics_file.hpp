@@ -5,6 +5,8 @@
 // then renamed; an existing file is never replaced.
 #pragma once
 
+#include <hdf5.h>
+
 #include <filesystem>
 #include <string>
 #include <vector>
@@ -22,6 +24,10 @@ struct StatisticsHeader {
   std::string source;         // the run folder or the snapshot the measurements were made on
   std::string configuration;  // the resolved configuration (YAML) they were made with
 };
+
+// Writes `a` as a float64 dataset of its shape under `group`, with the attributes unit, to_cgs and
+// description. Throws std::runtime_error for a shape that does not match the values.
+void write_measured_array(hid_t group, const MeasuredArray& a);
 
 // Throws std::runtime_error when the file exists or cannot be written (nothing is left behind).
 void write_statistics(const std::filesystem::path& file, const StatisticsHeader& header,

@@ -9,6 +9,7 @@
 
 #include "io/atomic_file.hpp"
 #include "io/hdf5_handles.hpp"
+#include "io/statistics_file.hpp"
 
 namespace brume::io {
 
@@ -45,23 +46,6 @@ std::string header_text(const std::vector<MeasuredNumber>& columns) {
   }
   text += '\n';
   return text;
-}
-
-void write_column(hid_t file, const MeasuredNumber& column, const std::vector<double>& values) {
-  const hsize_t count = values.size();
-  H5Handle space(checked(H5Screate_simple(1, &count, nullptr), "dataspace"), H5Sclose);
-  H5Handle dataset(checked(H5Dcreate2(file, column.name.c_str(), H5T_IEEE_F64LE, space.get(),
-                                      H5P_DEFAULT, H5P_DEFAULT, H5P_DEFAULT),
-                           "creating dataset " + column.name),
-                   H5Dclose);
-  if (count > 0) {
-    checked_status(H5Dwrite(dataset.get(), H5T_NATIVE_DOUBLE, H5S_ALL, H5S_ALL, H5P_DEFAULT,
-                            values.data()),
-                   "writing dataset " + column.name);
-  }
-  write_attribute(dataset.get(), "unit", column.unit);
-  write_attribute(dataset.get(), "to_cgs", column.to_cgs);
-  write_attribute(dataset.get(), "description", column.description);
 }
 
 }  // namespace
@@ -118,7 +102,9 @@ TimelineText read_timeline_text(const std::string& text, long step) {
 
 TimelineTable::TimelineTable(std::filesystem::path folder) : folder_(std::move(folder)) {}
 
-std::filesystem::path TimelineTable::text_file() const { return folder_ / "timeline.txt"; }
+std::filesystem::path TimelineTable::text_file() const {
+  return folder_ / "timeline.txt";
+}
 
 void TimelineTable::resume(long step) {
   std::ifstream in(text_file());
@@ -142,8 +128,8 @@ void TimelineTable::append(const std::vector<MeasuredNumber>& row) {
   if (columns_.empty()) {
     columns_ = row;
   } else if (columns_.size() != row.size()) {
-    throw std::runtime_error("timeline: a row of " + std::to_string(row.size()) +
-                             " numbers for " + std::to_string(columns_.size()) + " columns");
+    throw std::runtime_error("timeline: a row of " + std::to_string(row.size()) + " numbers for " +
+                             std::to_string(columns_.size()) + " columns");
   }
   // Resumed columns carry no description or factor: take them from the first new row.
   for (std::size_t n = 0; n < row.size(); ++n) {
@@ -154,12 +140,14 @@ void TimelineTable::append(const std::vector<MeasuredNumber>& row) {
     columns_[n].to_cgs = row[n].to_cgs;
   }
   std::vector<double> values;
-  for (const MeasuredNumber& n : row) values.push_back(n.value);
+  for (const MeasuredNumber& n : row)
+    values.push_back(n.value);
   rows_.push_back(values);
   if (rewrite_) {
     // A new table, or a resumed one: written whole, with the rows it keeps.
     std::string text = header_text(columns_);
-    for (const std::vector<double>& r : rows_) text += row_text(r);
+    for (const std::vector<double>& r : rows_)
+      text += row_text(r);
     write_file_atomically(text_file(), text);
     rewrite_ = false;
     return;
@@ -183,9 +171,11 @@ void TimelineTable::write_hdf5() const {
                   H5Fclose);
       write_attribute(h5.get(), "format", std::string("brume-timeline-1"));
       for (std::size_t c = 0; c < columns_.size(); ++c) {
-        std::vector<double> values;
-        for (const std::vector<double>& row : rows_) values.push_back(row[c]);
-        write_column(h5.get(), columns_[c], values);
+        MeasuredArray column{columns_[c].name,        columns_[c].unit, columns_[c].to_cgs,
+                             columns_[c].description, {rows_.size()},   {}};
+        for (const std::vector<double>& row : rows_)
+          column.values.push_back(row[c]);
+        write_measured_array(h5.get(), column);
       }
       if (!h5.close()) throw std::runtime_error("closing " + temporary + " failed");
     }

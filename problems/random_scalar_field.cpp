@@ -4,7 +4,7 @@
 #include <numbers>
 #include <random>
 
-#include "problems/random_deviates.hpp"
+#include "problems/random_field_parts.hpp"
 
 namespace brume::problems {
 
@@ -12,21 +12,11 @@ RandomScalarField::RandomScalarField(std::array<double, 3> box_size, std::array<
                                      int lowest, int highest, double rms, std::uint64_t seed)
     : box_size_(box_size) {
   std::mt19937_64 generator(seed);
-  std::array<int, 3> reach{};
-  for (int d = 0; d < 3; ++d)
-    reach[d] = active[d] ? highest : 0;
   double mean_square = 0.0;
-  for (int kx = -reach[0]; kx <= reach[0]; ++kx) {
-    for (int ky = -reach[1]; ky <= reach[1]; ++ky) {
-      for (int kz = -reach[2]; kz <= reach[2]; ++kz) {
-        const std::array<int, 3> k{kx, ky, kz};
-        const int k2 = kx * kx + ky * ky + kz * kz;
-        if (k2 < lowest * lowest || k2 > highest * highest || !upper_half(k)) continue;
-        const double a = gaussian_deviate(generator);
-        modes_.push_back({k, a, 2.0 * std::numbers::pi * uniform_deviate(generator)});
-        mean_square += 0.5 * a * a;  // ⟨cos²⟩ = 1/2; distinct modes are orthogonal
-      }
-    }
+  for (const std::array<int, 3>& k : shell_wave_vectors(active, lowest, highest)) {
+    const double a = gaussian_deviate(generator);
+    modes_.push_back({k, a, 2.0 * std::numbers::pi * uniform_deviate(generator)});
+    mean_square += 0.5 * a * a;  // ⟨cos²⟩ = 1/2; distinct modes are orthogonal
   }
   const double scale = mean_square > 0.0 ? rms / std::sqrt(mean_square) : 0.0;
   for (Mode& mode : modes_)

@@ -4,7 +4,7 @@
 #include <numbers>
 #include <random>
 
-#include "problems/random_deviates.hpp"
+#include "problems/random_field_parts.hpp"
 
 namespace brume::problems {
 
@@ -13,34 +13,24 @@ RandomSolenoidalField::RandomSolenoidalField(std::array<double, 3> box_size,
                                              double rms, std::uint64_t seed)
     : box_size_(box_size) {
   std::mt19937_64 generator(seed);
-  std::array<int, 3> reach{};
-  for (int d = 0; d < 3; ++d)
-    reach[d] = active[d] ? highest : 0;
   double mean_square = 0.0;
-  for (int kx = -reach[0]; kx <= reach[0]; ++kx) {
-    for (int ky = -reach[1]; ky <= reach[1]; ++ky) {
-      for (int kz = -reach[2]; kz <= reach[2]; ++kz) {
-        const std::array<int, 3> k{kx, ky, kz};
-        const int k2 = kx * kx + ky * ky + kz * kz;
-        if (k2 < lowest * lowest || k2 > highest * highest || !upper_half(k)) continue;
-        // Wave vector in physical units, for the projection perpendicular to it.
-        std::array<double, 3> kv{};
-        double kv2 = 0.0;
-        for (int d = 0; d < 3; ++d) {
-          kv[d] = k[d] / box_size[d];
-          kv2 += kv[d] * kv[d];
-        }
-        std::array<double, 3> a{gaussian_deviate(generator), gaussian_deviate(generator),
-                                gaussian_deviate(generator)};
-        const double along = (a[0] * kv[0] + a[1] * kv[1] + a[2] * kv[2]) / kv2;
-        for (int d = 0; d < 3; ++d)
-          a[d] -= along * kv[d];
-        const double phase = 2.0 * std::numbers::pi * uniform_deviate(generator);
-        modes_.push_back({k, a, phase});
-        // ⟨sin²⟩ = 1/2 over the box for every mode, and distinct modes are orthogonal.
-        mean_square += 0.5 * (a[0] * a[0] + a[1] * a[1] + a[2] * a[2]);
-      }
+  for (const std::array<int, 3>& k : shell_wave_vectors(active, lowest, highest)) {
+    // Wave vector in physical units, for the projection perpendicular to it.
+    std::array<double, 3> kv{};
+    double kv2 = 0.0;
+    for (int d = 0; d < 3; ++d) {
+      kv[d] = k[d] / box_size[d];
+      kv2 += kv[d] * kv[d];
     }
+    std::array<double, 3> a{gaussian_deviate(generator), gaussian_deviate(generator),
+                            gaussian_deviate(generator)};
+    const double along = (a[0] * kv[0] + a[1] * kv[1] + a[2] * kv[2]) / kv2;
+    for (int d = 0; d < 3; ++d)
+      a[d] -= along * kv[d];
+    const double phase = 2.0 * std::numbers::pi * uniform_deviate(generator);
+    modes_.push_back({k, a, phase});
+    // ⟨sin²⟩ = 1/2 over the box for every mode, and distinct modes are orthogonal.
+    mean_square += 0.5 * (a[0] * a[0] + a[1] * a[1] + a[2] * a[2]);
   }
   const double scale = mean_square > 0.0 ? rms / std::sqrt(mean_square) : 0.0;
   for (auto& mode : modes_) {

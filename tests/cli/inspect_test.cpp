@@ -12,19 +12,13 @@
 #include "tests/support/run_python.hpp"
 
 namespace fs = std::filesystem;
+using brume::testing::file_bytes;
 using brume::testing::fresh_folder;
 using brume::testing::run_brume;
 using brume::testing::run_python;
 using brume::testing::source_script;
 
 namespace {
-
-std::string bytes_of(const fs::path& file) {
-  std::ifstream in(file, std::ios::binary);
-  std::stringstream bytes;
-  bytes << in.rdbuf();
-  return bytes.str();
-}
 
 // The final snapshot of an 8³ decaying-turbulence run (t = 0.05 Myr) into `folder`/run.
 fs::path tiny_snapshot(const fs::path& folder, const std::string& options) {
@@ -54,7 +48,7 @@ void expect_contains(const std::string& text, const std::vector<std::string>& wo
 TEST(Inspect, ASoundSnapshotIsDescribedAndLeftUntouched) {
   const fs::path folder = fresh_folder("brume-inspect");
   const fs::path file = tiny_snapshot(folder, "--set output.compression=deflate");
-  const std::string before = bytes_of(file);
+  const std::string before = file_bytes(file);
   const auto r = run_brume("inspect '" + file.string() + "'");
   EXPECT_EQ(r.exit_code, 0) << r.err;
   EXPECT_EQ(r.err, "");
@@ -79,7 +73,7 @@ TEST(Inspect, ASoundSnapshotIsDescribedAndLeftUntouched) {
                           "verdict        sound",
                           "(print them with --configuration)"});
   EXPECT_EQ(r.out.find("problem:"), std::string::npos) << "configuration only on request";
-  EXPECT_EQ(bytes_of(file), before) << "inspect must not change the file";
+  EXPECT_EQ(file_bytes(file), before) << "inspect must not change the file";
   fs::remove_all(folder);
 }
 
@@ -155,7 +149,7 @@ TEST_P(InspectBadFile, ExitsTwoWithOneMessageNamingTheFileAndChangesNothing) {
   const fs::path good = tiny_snapshot(folder, "--set output.compression=deflate");
   const fs::path bad = make_bad_file(c.name, good);
   const bool exists = fs::is_regular_file(bad);
-  const std::string before = exists ? bytes_of(bad) : "";
+  const std::string before = exists ? file_bytes(bad) : "";
   const auto r = run_brume("inspect '" + bad.string() + "'");
   EXPECT_EQ(r.exit_code, 2) << r.err;
   const std::string prefix = "brume: error: " + bad.string() + ": ";
@@ -168,7 +162,7 @@ TEST_P(InspectBadFile, ExitsTwoWithOneMessageNamingTheFileAndChangesNothing) {
     EXPECT_EQ(r.out, "");
   }
   if (exists) {
-    EXPECT_EQ(bytes_of(bad), before) << "inspect must not change the file";
+    EXPECT_EQ(file_bytes(bad), before) << "inspect must not change the file";
   }
   fs::remove_all(folder);
 }

@@ -21,6 +21,7 @@
 #include "tests/support/run_python.hpp"
 
 namespace fs = std::filesystem;
+using brume::testing::file_bytes;
 using brume::testing::fresh_folder;
 using brume::testing::run_brume;
 using brume::testing::run_python;
@@ -30,18 +31,11 @@ namespace {
 
 const std::string demo = "'" + std::string(BRUME_SOURCE_DIR) + "/problems/demo.yaml'";
 
-std::string text_of(const fs::path& file) {
-  std::ifstream in(file, std::ios::binary);
-  std::stringstream bytes;
-  bytes << in.rdbuf();
-  return bytes.str();
-}
-
 // Every file below `folder` with its bytes: what "nothing changed" compares.
 std::map<std::string, std::string> contents(const fs::path& folder) {
   std::map<std::string, std::string> files;
   for (const auto& entry : fs::recursive_directory_iterator(folder)) {
-    if (entry.is_regular_file()) files[entry.path().string()] = text_of(entry.path());
+    if (entry.is_regular_file()) files[entry.path().string()] = file_bytes(entry.path());
   }
   return files;
 }
@@ -132,7 +126,7 @@ TEST(Restart, ContinuesBitForBitAndKeepsNumberingTheSnapshots) {
   const auto same = run_python(script, {(folder / "full" / "snapshot-0001.h5").string(),
                                         (folder / "split" / "snapshot-0002.h5").string()});
   EXPECT_EQ(same.exit_code, 0) << same.output;
-  EXPECT_NE(text_of(folder / "split" / "run.log").find("restart from"), std::string::npos);
+  EXPECT_NE(file_bytes(folder / "split" / "run.log").find("restart from"), std::string::npos);
   // `brume inspect` knows a checkpoint and shows its run state.
   const auto inspect =
       run_brume("inspect '" + (folder / "split" / "checkpoint-0001.h5").string() + "'");
@@ -163,9 +157,9 @@ TEST(Restart, AStopSignalEndsTheRunWithACheckpointAndExitCodeFour) {
     ASSERT_TRUE(wait_for([&] { return fs::exists(out / "snapshot-0000.h5"); }, 60.0));
     std::this_thread::sleep_for(std::chrono::milliseconds(300));
     ::kill(pid, signal);
-    EXPECT_EQ(exit_code_of(pid), 4) << text_of(folder / "output.txt");
+    EXPECT_EQ(exit_code_of(pid), 4) << file_bytes(folder / "output.txt");
     EXPECT_TRUE(fs::exists(out / "checkpoint-0000.h5")) << signal;
-    const std::string summary = text_of(out / "summary.txt");
+    const std::string summary = file_bytes(out / "summary.txt");
     EXPECT_NE(summary.find("stopped on a stop signal"), std::string::npos) << summary;
     EXPECT_NE(summary.find(signal == SIGTERM  ? "SIGTERM"
                            : signal == SIGINT ? "SIGINT"
@@ -190,7 +184,7 @@ TEST(Restart, TheWallBudgetEndsTheRunWithACheckpointAndExitCodeFour) {
                            (folder / "run").string() + "'");
   EXPECT_EQ(r.exit_code, 4) << r.err;
   EXPECT_TRUE(fs::exists(folder / "run" / "checkpoint-0000.h5"));
-  EXPECT_NE(text_of(folder / "run" / "summary.txt").find("used up clock.wall_budget"),
+  EXPECT_NE(file_bytes(folder / "run" / "summary.txt").find("used up clock.wall_budget"),
             std::string::npos);
   fs::remove_all(folder);
 }
@@ -216,7 +210,7 @@ TEST(Restart, AKillDuringACheckpointLeavesThePreviousOneRestartable) {
         120.0);
     ::kill(pid, SIGKILL);
     EXPECT_EQ(exit_code_of(pid), -SIGKILL);
-    ASSERT_TRUE(writing) << text_of(folder / "output.txt");
+    ASSERT_TRUE(writing) << file_bytes(folder / "output.txt");
     killed_mid_write = has_partial_checkpoint(out);
   }
   ASSERT_TRUE(killed_mid_write);

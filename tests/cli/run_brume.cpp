@@ -10,14 +10,12 @@
 
 namespace brume::testing {
 
-namespace {
-std::string slurp(const std::filesystem::path& path) {
-  std::ifstream in(path);
+std::string file_bytes(const std::filesystem::path& path) {
+  std::ifstream in(path, std::ios::binary);
   std::stringstream text;
   text << in.rdbuf();
   return text.str();
 }
-}  // namespace
 
 std::string fresh_folder(const std::string& stem) {
   std::string pattern = (std::filesystem::temp_directory_path() / (stem + "-XXXXXX")).string();
@@ -35,8 +33,8 @@ CommandResult run_brume(const std::string& arguments) {
   const int status = std::system(command.c_str());
   CommandResult result;
   result.exit_code = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
-  result.out = slurp(out);
-  result.err = slurp(err);
+  result.out = file_bytes(out);
+  result.err = file_bytes(err);
   std::filesystem::remove_all(folder);
   return result;
 }

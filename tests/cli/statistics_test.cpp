@@ -18,6 +18,7 @@
 #include "tests/support/run_python.hpp"
 
 namespace fs = std::filesystem;
+using brume::testing::file_bytes;
 using brume::testing::fresh_folder;
 using brume::testing::run_brume;
 using brume::testing::run_python;
@@ -25,17 +26,10 @@ using brume::testing::source_script;
 
 namespace {
 
-std::string text_of(const fs::path& file) {
-  std::ifstream in(file, std::ios::binary);
-  std::stringstream bytes;
-  bytes << in.rdbuf();
-  return bytes.str();
-}
-
 // The rows of a timeline.txt, each a list of its words.
 std::vector<std::vector<std::string>> rows_of(const fs::path& file, std::string& columns) {
   std::vector<std::vector<std::string>> rows;
-  std::istringstream lines(text_of(file));
+  std::istringstream lines(file_bytes(file));
   std::string line;
   while (std::getline(lines, line)) {
     if (line.rfind("# columns:", 0) == 0) columns = line;
@@ -153,7 +147,7 @@ TEST(Analyze, BadInputIsRefusedWithExitCodeTwoAndNothingChanges) {
   const auto taken = run_brume(words({"analyze", snapshot, "--out", quoted(out)}));
   EXPECT_EQ(taken.exit_code, 2);
   EXPECT_NE(taken.err.find("taken.h5"), std::string::npos) << taken.err;
-  EXPECT_EQ(text_of(out), "earlier results");
+  EXPECT_EQ(file_bytes(out), "earlier results");
   // The default output sits beside the snapshot.
   const auto ok = run_brume(words({"analyze", snapshot, "-q"}));
   EXPECT_EQ(ok.exit_code, 0) << ok.err;
