@@ -23,6 +23,8 @@ const std::vector<SubcommandInfo>& subcommands() {
        "describe a snapshot (fields, units, provenance) and check that it is sound"},
       {"analyze", "SNAPSHOT [--out FILE] [--set KEY=VALUE]...",
        "measure a saved snapshot with the run's diagnostics (PDFs, spectra, maps, ...)"},
+      {"plot", "RUN_FOLDER [--out DIR]",
+       "draw the figures of a run folder as PNG files (time series, PDFs, spectra, maps)"},
   };
   return list;
 }

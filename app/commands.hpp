@@ -13,6 +13,7 @@ namespace brume::app {
 [[nodiscard]] int bench_command(const CommandLine& line, const io::Log& log);
 [[nodiscard]] int inspect_command(const CommandLine& line);
 [[nodiscard]] int analyze_command(const CommandLine& line, const io::Log& log);
+[[nodiscard]] int plot_command(const CommandLine& line);
 [[nodiscard]] int run_command(const CommandLine& line, const io::Log& log, const MpiSession& mpi);
 
 }  // namespace brume::app

@@ -28,6 +28,7 @@ std::string help_text() {
       "                           validated like the file, units allowed: --set box.size=20pc\n"
       "  --out DIR                run folder for `run` (default: output.folder, else runs/NAME);\n"
       "                           `analyze`: the statistics file (default SNAPSHOT-statistics.h5)\n"
+      "                           `plot`: the figures' folder (default RUN_FOLDER/figures)\n"
       "  --restart PATH           `run`: continue from a checkpoint file, or from the newest\n"
       "                           checkpoint of a run folder; --set may change clock.* and "
       "output.*\n"

@@ -20,7 +20,7 @@ import h5py  # noqa: E402
 import matplotlib.pyplot as plt  # noqa: E402
 import numpy as np  # noqa: E402
 import yaml  # noqa: E402
-from matplotlib.colors import LogNorm  # noqa: E402
+from matplotlib.colors import LogNorm, Normalize  # noqa: E402
 
 # Constants as solver/units/constants.hpp has them (CODATA 2018, IAU 2015 B2, Julian year).
 BOLTZMANN = 1.380649e-16  # erg/K
@@ -70,6 +70,12 @@ def save(fig, out, name, written):
 def per_log_bin(fraction, edges):
     """A histogram's fractions divided by the width in ln x of its bins: the PDF per unit ln x."""
     return np.asarray(fraction) / np.diff(np.log(edges))
+
+
+def colour_scale(values):
+    """Logarithmic colours for values spanning more than a decade, else linear ones."""
+    low, high = np.nanmin(values), np.nanmax(values)
+    return LogNorm(vmin=low, vmax=high) if high > 10 * low else Normalize(vmin=low, vmax=high)
 
 
 def positive(values):
@@ -173,7 +179,7 @@ def timeline_mach(tl, out, written):
 # --- distributions (last statistics file) ----------------------------------------------------
 
 
-def pdf_panel(ax, group, name, xlabel):
+def pdf_panel(ax, group, name, xlabel, symbol):
     edges = group[f"{name}_edges"][()]
     centres = np.sqrt(edges[:-1] * edges[1:])
     for weight, style in [("volume", "-"), ("mass", "--")]:
@@ -182,13 +188,13 @@ def pdf_panel(ax, group, name, xlabel):
     ax.set_xscale("log")
     ax.set_yscale("log")
     ax.set_xlabel(xlabel)
-    ax.set_ylabel("PDF per unit ln x")
+    ax.set_ylabel(f"PDF per unit ln {symbol}")
     ax.grid(alpha=0.3)
 
 
 def density_pdf(dist, when, out, written):
     fig, ax = plt.subplots(figsize=(7, 4.5))
-    pdf_panel(ax, dist, "density", "number density n (cm$^{-3}$)")
+    pdf_panel(ax, dist, "density", "number density n (cm$^{-3}$)", "n")
     ax.set_title(f"Density PDF, {when}")
     ax.legend()
     fig.tight_layout()
@@ -197,7 +203,7 @@ def density_pdf(dist, when, out, written):
 
 def temperature_pdf(dist, overview, when, out, written):
     fig, ax = plt.subplots(figsize=(7, 4.5))
-    pdf_panel(ax, dist, "temperature", "temperature T (K)")
+    pdf_panel(ax, dist, "temperature", "temperature T (K)", "T")
     for key, label in [("cold_below", "cold below"), ("warm_above", "warm above")]:
         if key in overview:
             value = float(overview[key][()])
@@ -214,9 +220,11 @@ def beta_pdf(dist, when, out, written):
     if "plasma_beta_edges" not in dist:
         return skip("beta-pdf.png", "no magnetic histograms (hydrodynamic run)")
     fig, axes = plt.subplots(1, 2, figsize=(11, 4.2))
-    pdf_panel(axes[0], dist, "plasma_beta", "plasma β = 2p/B² (thermal / magnetic pressure)")
+    pdf_panel(axes[0], dist, "plasma_beta", "plasma β = 2p/B² (thermal / magnetic pressure)",
+              "β")
     axes[0].set_title("plasma β")
-    pdf_panel(axes[1], dist, "dynamic_ratio", "ρv²/B² (dynamic / magnetic pressure)")
+    pdf_panel(axes[1], dist, "dynamic_ratio", "ρv²/B² (dynamic / magnetic pressure)",
+              "(ρv²/B²)")
     axes[1].set_title("dynamic over magnetic pressure")
     for ax in axes:
         ax.axvline(1, color="grey", ls=":", lw=1)
@@ -241,6 +249,12 @@ def histogram_2d(fig, ax, x_edges, y_edges, fraction, title):
     ax.set_xscale("log")
     ax.set_yscale("log")
     ax.set_title(title)
+    # The occupied bins and a decade around them: the rest of the range is empty.
+    rows, cols = np.nonzero(np.isfinite(density))
+    ax.set_xlim(max(x_edges[0], x_edges[cols.min()] / 10),
+                min(x_edges[-1], x_edges[cols.max() + 1] * 10))
+    ax.set_ylim(max(y_edges[0], y_edges[rows.min()] / 10),
+                min(y_edges[-1], y_edges[rows.max() + 1] * 10))
 
 
 def phase_diagram(dist, overview, when, out, written):
@@ -252,13 +266,14 @@ def phase_diagram(dist, overview, when, out, written):
         if "phase_equilibrium_density" in dist:
             ax.plot(dist["phase_equilibrium_density"][()], dist["phase_equilibrium_pressure"][()],
                     color="red", lw=1.5, label="thermal equilibrium P_eq(n)")
-        for key in ["cold_below", "warm_above"]:
+        limits = ax.get_xlim(), ax.get_ylim()  # the isotherms must not widen them
+        for key, colour in [("cold_below", "tab:blue"), ("warm_above", "tab:orange")]:
             if key in overview:
                 temperature = float(overview[key][()])
-                ax.plot(n_edges, n_edges * temperature, color="white", ls=":", lw=1,
-                        label=f"T = {temperature:.4g} K")
-        ax.set_xlim(n_edges[0], n_edges[-1])
-        ax.set_ylim(p_edges[0], p_edges[-1])
+                ax.plot(n_edges, n_edges * temperature, color=colour, ls="--", lw=0.8,
+                        label=f"isotherm T = {temperature:.4g} K ({key})")
+        ax.set_xlim(limits[0])
+        ax.set_ylim(limits[1])
         ax.set_xlabel("number density n (cm$^{-3}$)")
     axes[0].set_ylabel("thermal pressure P/k$_B$ (K cm$^{-3}$)")
     axes[0].legend(fontsize=8, loc="upper left")
@@ -272,7 +287,8 @@ def phase_diagram(dist, overview, when, out, written):
 def field_density(dist, when, out, written):
     if "field_density_density_edges" not in dist:
         return skip("field-density.png", "no magnetic histograms (hydrodynamic run)")
-    n_edges, b_edges = dist["field_density_density_edges"][()], dist["field_density_field_edges"][()]
+    n_edges = dist["field_density_density_edges"][()]
+    b_edges = dist["field_density_field_edges"][()]
     fig, axes = plt.subplots(1, 2, figsize=(12, 4.8), sharey=True)
     for ax, weight in zip(axes, ["volume", "mass"]):
         histogram_2d(fig, ax, n_edges, b_edges, dist[f"field_density_{weight}_fraction"][()],
@@ -287,7 +303,7 @@ def field_density(dist, when, out, written):
 def jeans_figure(jeans, when, out, written):
     edges = jeans["density_contrast_edges"][()]
     fig, ax = plt.subplots(figsize=(7, 4.5))
-    pdf_panel(ax, jeans, "density_contrast", "density contrast ρ/ρ̄")
+    pdf_panel(ax, jeans, "density_contrast", "density contrast ρ/ρ̄", "(ρ/ρ̄)")
     s_crit = float(jeans["critical_log_density"][()])
     if math.isfinite(s_crit):
         ax.axvline(math.exp(s_crit), color="red", ls="--",
@@ -298,8 +314,11 @@ def jeans_figure(jeans, when, out, written):
                  f" SFR_ff estimate (no self-gravity): {rate:.3g}", fontsize=10)
     used = positive(jeans["density_contrast_volume_fraction"][()])
     rows = np.nonzero(np.isfinite(used))[0]
-    if rows.size:
-        ax.set_xlim(edges[max(rows[0] - 5, 0)], edges[min(rows[-1] + 6, edges.size - 1)])
+    if rows.size:  # the occupied bins, and the critical density
+        low, high = edges[max(rows[0] - 5, 0)], edges[min(rows[-1] + 6, edges.size - 1)]
+        if math.isfinite(s_crit):
+            low, high = min(low, 0.5 * math.exp(s_crit)), max(high, 2 * math.exp(s_crit))
+        ax.set_xlim(low, high)
     ax.legend(fontsize=8)
     fig.tight_layout()
     save(fig, out, "jeans.png", written)
@@ -309,12 +328,14 @@ def jeans_figure(jeans, when, out, written):
 
 
 def nyquist_shell(h5):
-    """n/2 of the axis with the fewest cells (of those with more than one), from the configuration."""
+    """n/2 of the axis with the fewest cells (of those with more than one cell)."""
     cells = [c for c in yaml.safe_load(h5.attrs["configuration"])["box"]["cells"] if c > 1]
     return min(cells) // 2
 
 
 def spectra(spec, k_nyquist, when, out, written):
+    """Shell spectra times k^(5/3), flat in a Kolmogorov inertial range (Kolmogorov 1941, Dokl.
+    Akad. Nauk SSSR 30, 301; from memory)."""
     k = spec["wavenumber"][()]  # stored in units of 2π/L (to_cgs is 2π/L in cm^-1)
     shells = (k >= 1) & (k <= k_nyquist)
     kk = k[shells]
@@ -331,7 +352,7 @@ def spectra(spec, k_nyquist, when, out, written):
         ax.set_yscale("log")
         ax.set_xlabel("wavenumber k (units of 2π/L)")
         ax.set_ylabel(ylabel)
-        ax.grid(alpha=0.3, which="both")
+        ax.grid(alpha=0.3)
         ax.legend(fontsize=8)
 
     panel(axes[0, 0], [("velocity_power", "v, total"), ("velocity_solenoidal_power", "solenoidal"),
@@ -355,6 +376,8 @@ def spectra(spec, k_nyquist, when, out, written):
 
 
 def helmholtz(spec, k_nyquist, when, out, written):
+    """The compressive share per shell; 1/3 for random phases in 3D, one longitudinal of three
+    components (common practice, no source)."""
     k = spec["wavenumber"][()]
     shells = (k >= 1) & (k <= k_nyquist)
     fig, ax = plt.subplots(figsize=(7, 4.5))
@@ -369,12 +392,14 @@ def helmholtz(spec, k_nyquist, when, out, written):
     ax.set_ylabel("compressive / (solenoidal + compressive) power")
     ax.set_title(f"Helmholtz decomposition of the velocity, {when}")
     ax.legend()
-    ax.grid(alpha=0.3, which="both")
+    ax.grid(alpha=0.3)
     fig.tight_layout()
     save(fig, out, "helmholtz.png", written)
 
 
 def structure_functions(sf, when, out, written):
+    """S_2 with the guides ℓ^(2/3) (Kolmogorov 1941, from memory) and ℓ (shock-dominated,
+    Burgers; common practice, no source), S_p^(1/p), F_3 and the cold-gas σ(ℓ)."""
     lag_pc = cgs(sf["lag_length"])[0] / PARSEC  # the x spacing; the axis mean assumes equal ones
     fig, axes = plt.subplots(2, 2, figsize=(12, 8.5))
     ax = axes[0, 0]
@@ -383,7 +408,8 @@ def structure_functions(sf, when, out, written):
     reference = cgs(sf["longitudinal_order_2"])[0] / KM_PER_S**2
     ax.plot(lag_pc, reference * (lag_pc / lag_pc[0]) ** (2 / 3), color="grey", ls=":",
             label="∝ ℓ$^{2/3}$ (Kolmogorov)")
-    ax.plot(lag_pc, reference * (lag_pc / lag_pc[0]), color="grey", ls="-.", label="∝ ℓ (Burgers)")
+    ax.plot(lag_pc, reference * (lag_pc / lag_pc[0]), color="grey", ls="-.",
+            label="∝ ℓ (Burgers)")
     ax.set_ylabel("S$_2$(ℓ)  ((km/s)$^2$)")
     ax.set_title("second order")
     ax = axes[0, 1]
@@ -411,8 +437,8 @@ def structure_functions(sf, when, out, written):
             ax.plot(lag_pc, np.nanmax(sigma) * (lag_pc / lag_pc[-1]) ** slope, color="grey",
                     ls=":", label=f"fitted slope {slope:.2f} ± {error:.2f}")
         else:
-            ax.text(0.05, 0.9, "size–linewidth slope not fitted (too few cold pairs)",
-                    transform=ax.transAxes, fontsize=8)
+            ax.text(0.95, 0.05, "size–linewidth slope not fitted (too few cold pairs)",
+                    transform=ax.transAxes, fontsize=8, ha="right")
         ax.set_ylabel("cold-gas velocity dispersion σ(ℓ) (km/s)")
     else:
         ax.text(0.5, 0.5, "no pairs of cold cells", transform=ax.transAxes, ha="center")
@@ -422,7 +448,7 @@ def structure_functions(sf, when, out, written):
         if ax is not axes[1, 0] and ax.lines:
             ax.set_yscale("log")
         ax.set_xlabel("lag ℓ (pc)")
-        ax.grid(alpha=0.3, which="both")
+        ax.grid(alpha=0.3)
         if ax.lines:
             ax.legend(fontsize=8)
     fig.suptitle(f"Velocity structure functions (axis means), {when}")
@@ -437,6 +463,11 @@ MAP_AXES = {"x": ("y", "z"), "y": ("z", "x"), "z": ("x", "y")}  # line of sight:
 
 def sky_axes(sky):
     return [a for a in "xyz" if f"column_density_along_{a}" in sky]
+
+
+def polarized(sky, axes):
+    """Whether any map has Q or U: a hydrodynamic run has none (docs/sky-maps.md)."""
+    return any(np.any(sky[f"stokes_{s}_along_{a}"][()] != 0) for a in axes for s in "qu")
 
 
 def map_extent(box_pc, axis):
@@ -455,7 +486,7 @@ def column_density(sky, box_pc, when, out, written):
         column = positive(sky[f"column_density_along_{axis}"][()])
         extent, unit = map_extent(box_pc, axis)
         image = ax.imshow(column, origin="lower", extent=extent, cmap="magma",
-                          norm=LogNorm(vmin=np.nanmin(column), vmax=np.nanmax(column)))
+                          norm=colour_scale(column))
         fig.colorbar(image, ax=ax, label="column density N (cm$^{-2}$)", shrink=0.85)
         u, v = MAP_AXES[axis]
         ax.set_xlabel(f"{u} ({unit})")
@@ -468,8 +499,7 @@ def column_density(sky, box_pc, when, out, written):
 
 def polarization(sky, box_pc, when, out, written):
     axes_present = sky_axes(sky)
-    q = sky[f"stokes_q_along_{axes_present[0]}"][()]
-    if not np.any(q != 0):
+    if not polarized(sky, axes_present):
         return skip("polarization.png", "Q = U = 0 (no magnetic field)")
     p0 = float(sky["polarization_fraction"][()])
     fig, axes = plt.subplots(1, len(axes_present), figsize=(5 * len(axes_present) + 1, 4.8),
@@ -481,9 +511,9 @@ def polarization(sky, box_pc, when, out, written):
         width_u = (extent[1] - extent[0]) / cols if extent else 1.0
         width_v = (extent[3] - extent[2]) / rows if extent else 1.0
         image = ax.imshow(column, origin="lower", extent=extent or [0, cols, 0, rows], cmap="bone",
-                          norm=LogNorm(vmin=np.nanmin(column), vmax=np.nanmax(column)))
+                          norm=colour_scale(column))
         fig.colorbar(image, ax=ax, label="column density N (cm$^{-2}$)", shrink=0.85)
-        # Plane-of-sky field orientation (IAU: from north +v through east −u): direction (−sin, cos).
+        # Plane-of-sky field orientation, IAU (from north +v through east −u): (−sin, cos).
         angle = np.radians(sky[f"field_angle_along_{axis}"][()])
         fraction = sky[f"polarization_fraction_along_{axis}"][()]
         stride = max(1, max(rows, cols) // 24)
@@ -498,21 +528,26 @@ def polarization(sky, box_pc, when, out, written):
         ax.set_xlabel(f"{u} ({unit})   [east ←]")
         ax.set_ylabel(f"{v} ({unit})   [north ↑]")
         ax.set_title(f"along {axis}: mean p = {np.mean(fraction):.3g}")
-    fig.suptitle(f"Column density and plane-of-sky field orientation (ψ + 90°, IAU; segment length ∝ "
+    fig.suptitle("Column density and plane-of-sky field orientation (ψ + 90°, IAU; segment "
+                 "length ∝ "
                  f"p/p$_0$, p$_0$ = {p0:g}), {when}", fontsize=10)
     fig.tight_layout()
     save(fig, out, "polarization.png", written)
 
 
 def eb_spectra(sky, when, out, written):
+    """C_TT, C_EE, C_BB per map with the slopes brume fitted (docs/sky-maps.md)."""
     axes_present = [a for a in sky_axes(sky) if f"spectrum_ee_along_{a}" in sky]
     if not axes_present:
         return skip("eb-spectra.png", "no map spectra (maps thinner than two cells)")
+    if not polarized(sky, axes_present):
+        return skip("eb-spectra.png", "Q = U = 0 (no magnetic field): no E and B modes")
     fig, axes = plt.subplots(1, len(axes_present), figsize=(5 * len(axes_present) + 1, 4.6),
                              squeeze=False)
     for ax, axis in zip(axes[0], axes_present):
         kappa = sky[f"spectrum_wavenumber_along_{axis}"][()]
-        low, high = float(sky[f"fit_lowest_along_{axis}"][()]), float(sky[f"fit_highest_along_{axis}"][()])
+        low = float(sky[f"fit_lowest_along_{axis}"][()])
+        high = float(sky[f"fit_highest_along_{axis}"][()])
         annulus = np.arange(1, kappa.size + 1)
         fitted = (annulus >= low) & (annulus <= high)
         for name, colour in [("tt", "k"), ("ee", "tab:blue"), ("bb", "tab:red")]:
@@ -533,7 +568,7 @@ def eb_spectra(sky, when, out, written):
         ratio = float(sky[f"bb_over_ee_along_{axis}"][()])
         ax.set_title(f"along {axis}: BB/EE = {ratio:.3g}")
         ax.legend(fontsize=8)
-        ax.grid(alpha=0.3, which="both")
+        ax.grid(alpha=0.3)
     fig.suptitle(f"Dust-polarization power spectra TT, EE, BB (dotted: fitted power laws), {when}")
     fig.tight_layout()
     save(fig, out, "eb-spectra.png", written)
@@ -547,7 +582,8 @@ def snapshot_slices(path, out, written):
         fields = snap["fields"]
         config = yaml.safe_load(snap.attrs["configuration"])
         gas = config["gas"]
-        box_pc = np.asarray(snap.attrs["size"], dtype=float) * float(snap.attrs["length_to_cgs"]) / PARSEC
+        size = np.asarray(snap.attrs["size"], dtype=float)
+        box_pc = size * float(snap.attrs["length_to_cgs"]) / PARSEC
         when = f"{os.path.basename(path)}, t = {file_time_myr(snap):.3g} Myr"
         nz = fields["density"].shape[0]
         z = nz // 2
@@ -565,7 +601,7 @@ def snapshot_slices(path, out, written):
     for ax, (values, label, cmap) in zip(axes[0], panels):
         v = positive(values)
         image = ax.imshow(v, origin="lower", extent=[0, box_pc[0], 0, box_pc[1]], cmap=cmap,
-                          norm=LogNorm(vmin=np.nanmin(v), vmax=np.nanmax(v)))
+                          norm=colour_scale(v))
         fig.colorbar(image, ax=ax, label=label, shrink=0.85)
         ax.set_xlabel("x (pc)")
         ax.set_ylabel("y (pc)")
@@ -575,7 +611,9 @@ def snapshot_slices(path, out, written):
 
 
 def slice_temperature(fields, z, rho, mu_mh, gamma):
-    """T = p μ m_H/(ρ k_B), p = (γ − 1)(E − ρv²/2 − B²/2); B the face average (docs/snapshots.md)."""
+    """T = p μ m_H/(ρ k_B), p = (γ − 1)(E − ρv²/2 − B²/8π) in cgs; B the face average.
+
+    Plane z of the snapshot (docs/snapshots.md); p = n k_B T with one μ, as docs/cooling.md."""
     energy = cgs_planes(fields["total_energy"], z)[0]
     kinetic = sum(cgs_planes(fields[f"momentum_{a}"], z)[0] ** 2 for a in "xyz") / (2 * rho)
     magnetic = 0.0

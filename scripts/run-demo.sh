@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # Sets brume up (dependencies, configure, build) and runs the main job on every core of this machine:
-# the demo turbulence box of problems/, writing into a new run folder under runs/.
+# the demo box of problems/ (driven two-phase MHD turbulence), writing into a new run folder under
+# runs/, and draws its figures into the folder's figures/.
 #   scripts/run-demo.sh [extra brume run options, e.g. --set clock.stop_time=2Myr]
 set -euo pipefail
 here=$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)
@@ -13,4 +14,5 @@ ranks=$(nproc 2>/dev/null || echo 1)
 out="$here/runs/demo-$(date +%Y%m%d-%H%M%S)"
 echo "brume: running $config on $ranks cores into $out"
 mpiexec -n "$ranks" "$here/build/release/bin/brume" run "$config" --out "$out" "$@"
-echo "brume: outputs are in $out"
+"$here/build/release/bin/brume" plot "$out"
+echo "brume: outputs are in $out, figures in $out/figures"

@@ -1,6 +1,7 @@
 #include "solver/exact_sum.hpp"
 
 #include <algorithm>
+#include <bit>
 #include <cmath>
 #include <limits>
 
@@ -12,25 +13,27 @@ constexpr int lowest_exponent = -1074;  // weight of bit 0 of digit 0
 }  // namespace
 
 void ExactSum::add(double value) {
-  if (!std::isfinite(value)) {
+  // Read the IEEE 754 binary64 fields directly (no frexp/ldexp calls): |value| = mantissa ·
+  // 2^(position − 1074) with an integer mantissa < 2^53, position ≥ 0.
+  const auto bits = std::bit_cast<std::uint64_t>(value);
+  const int biased = int((bits >> 52) & 0x7ff);
+  if (biased == 0x7ff) {  // infinity or NaN
     ++non_finite_;
     return;
   }
-  if (value == 0.0) return;
-  int exponent = 0;
-  const double fraction = std::frexp(std::fabs(value), &exponent);  // value = f · 2^e, f ∈ [½, 1)
-  // |value| = mantissa · 2^(exponent − 53) with an integer mantissa < 2^53.
-  auto mantissa = static_cast<std::uint64_t>(std::ldexp(fraction, 53));
-  int position = exponent - 53 - lowest_exponent;
-  if (position < 0) {  // subnormal: the low bits shifted out are zero
-    mantissa >>= -position;
-    position = 0;
+  std::uint64_t mantissa = bits & ((std::uint64_t(1) << 52) - 1);
+  int position = 0;  // subnormal (or zero): mantissa · 2^-1074
+  if (biased != 0) {
+    mantissa |= std::uint64_t(1) << 52;
+    position = biased - 1;
+  } else if (mantissa == 0) {
+    return;
   }
   const int digit = position / digit_bits;
   const int shift = position % digit_bits;
   const std::uint64_t low = (mantissa & std::uint64_t(digit_mask)) << shift;  // < 2^63
   const std::uint64_t high = (mantissa >> digit_bits) << shift;               // < 2^52
-  const std::int64_t sign = value < 0.0 ? -1 : 1;
+  const std::int64_t sign = (bits >> 63) != 0 ? -1 : 1;
   digits_[std::size_t(digit)] += sign * std::int64_t(low & std::uint64_t(digit_mask));
   digits_[std::size_t(digit) + 1] +=
       sign * std::int64_t((low >> digit_bits) + (high & std::uint64_t(digit_mask)));
