@@ -3,8 +3,8 @@
 #include <mpi.h>
 
 #include <cstdio>
-#include <stdexcept>
 #include <filesystem>
+#include <stdexcept>
 #include <string>
 #include <vector>
 
@@ -76,7 +76,8 @@ int analyze_command(const CommandLine& line, const io::Log& log) {
   BlockLayout layout = block_layout(config, setup, 1);
   solver::State state = solver::make_state(layout.geometry, setup.magnetic, setup.isothermal);
   if (state.magnetic != reader->magnetic() || state.isothermal != reader->isothermal()) {
-    throw UserError(file.string() + ": its fields do not match the gas its configuration describes");
+    throw UserError(file.string() +
+                    ": its fields do not match the gas its configuration describes");
   }
   try {
     reader->read_block(state);

@@ -150,9 +150,8 @@ int restart_run(const CommandLine& line, const io::Log& log_in, const MpiSession
   const fs::path folder = file.parent_path().empty() ? fs::path(".") : file.parent_path();
   io::Log log = log_in;
   log.copy_to(folder / "run.log");
-  on_rank_zero(session.decomposition->comm(), [&] {
-    set_aside_later_outputs(folder, resumed.record, number, state.step, log);
-  });
+  on_rank_zero(session.decomposition->comm(),
+               [&] { set_aside_later_outputs(folder, resumed.record, number, state.step, log); });
   log.info("brume: restart from " + file.string() + " at step " + std::to_string(state.step));
   for (const std::string& o : line.overrides)
     log.info("brume: changed on restart: " + o);

@@ -14,8 +14,8 @@
 #include "app/run_report.hpp"
 #include "app/scheme_choice.hpp"
 #include "app/snapshot_schedule.hpp"
-#include "app/statistics_schedule.hpp"
 #include "app/source_terms.hpp"
+#include "app/statistics_schedule.hpp"
 #include "app/stop_signals.hpp"
 #include "app/user_error.hpp"
 #include "io/atomic_file.hpp"
@@ -190,11 +190,11 @@ int drive_run(RunSession& session, const std::filesystem::path& folder, const io
   statistics_header.time_to_cgs = setup.code_units.time();
   statistics_header.source = folder.string();
   statistics_header.configuration = info.configuration;
-  StatisticsSchedule statistics(
-      folder, make_diagnostics(config, run_context(setup, comm, session.ghosts)),
-      run_context(setup, comm, session.ghosts), statistics_header,
-      config.real("statistics.interval") / setup.code_units.time(),
-      config.integer("statistics.timeline_every"), limits.time_unit, log);
+  const physics::RunContext context = run_context(setup, comm, session.ghosts);
+  StatisticsSchedule statistics(folder, make_diagnostics(config, context), context,
+                                statistics_header,
+                                config.real("statistics.interval") / setup.code_units.time(),
+                                config.integer("statistics.timeline_every"), limits.time_unit, log);
   const io::RunRecord earlier = resumed ? resumed->record : io::RunRecord{};
   RunTotals start;
   SplitIntegrator& integrator = *session.integrator;
@@ -244,9 +244,8 @@ int drive_run(RunSession& session, const std::filesystem::path& folder, const io
                               run_counters(earlier, summary));
       statistics.measure(state, true);
     }
-    checkpoints.write(
-        state, run_record(snapshots, statistics, integrator, start, earlier, summary),
-        summary.wall_seconds);
+    checkpoints.write(state, run_record(snapshots, statistics, integrator, start, earlier, summary),
+                      summary.wall_seconds);
   }
   statistics.write_timeline_hdf5();
   std::string report = run_report(summary, start, totals(state, comm), state, limits);

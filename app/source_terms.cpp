@@ -10,7 +10,7 @@
 namespace brume::app {
 
 physics::RunContext run_context(const RunSetup& setup, MPI_Comm comm,
-                                      std::shared_ptr<const solver::GhostFiller> ghosts) {
+                                std::shared_ptr<const solver::GhostFiller> ghosts) {
   physics::RunContext c;
   c.code_units = setup.code_units;
   c.gamma = setup.gamma;

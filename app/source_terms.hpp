@@ -12,8 +12,8 @@
 
 namespace brume::app {
 
-[[nodiscard]] physics::RunContext run_context(
-    const RunSetup& setup, MPI_Comm comm, std::shared_ptr<const solver::GhostFiller> ghosts);
+[[nodiscard]] physics::RunContext run_context(const RunSetup& setup, MPI_Comm comm,
+                                              std::shared_ptr<const solver::GhostFiller> ghosts);
 
 // Throws UserError for a source whose configuration cannot be used (e.g. an unreadable table).
 [[nodiscard]] std::vector<std::unique_ptr<physics::SourceTerm>> make_source_terms(

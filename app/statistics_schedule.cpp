@@ -57,8 +57,8 @@ class WallClock {
 StatisticsSchedule::StatisticsSchedule(std::filesystem::path folder,
                                        std::vector<ScheduledDiagnostic> diagnostics,
                                        physics::RunContext context, io::StatisticsHeader header,
-                                       double interval, long long timeline_every,
-                                       double time_unit, const io::Log& log)
+                                       double interval, long long timeline_every, double time_unit,
+                                       const io::Log& log)
     : folder_(std::move(folder)),
       diagnostics_(std::move(diagnostics)),
       context_(std::move(context)),
@@ -73,11 +73,18 @@ StatisticsSchedule::StatisticsSchedule(std::filesystem::path folder,
   if (rank == 0) timeline_.emplace(folder_);
 }
 
+void StatisticsSchedule::refresh_cells(const solver::State& state) {
+  // A row and a file at the same step share one pass over the block.
+  if (state.step == cells_step_) return;
+  physics::fill_cell_quantities(state, context_, cells_);
+  cells_step_ = state.step;
+}
+
 void StatisticsSchedule::measure(const solver::State& state, bool everything) {
   if (state.step == last_step_) return;
   const WallClock clock(wall_);
   last_step_ = state.step;
-  physics::fill_cell_quantities(state, context_, cells_);
+  refresh_cells(state);
   std::vector<io::Measurement> results;
   for (const ScheduledDiagnostic& d : diagnostics_) {
     if (everything || count_ % d.every == 0)
@@ -101,7 +108,7 @@ void StatisticsSchedule::timeline_row(const solver::State& state, double dt,
   if (timeline_every_ <= 0 || state.step == last_row_step_) return;
   const WallClock clock(wall_);
   last_row_step_ = state.step;
-  physics::fill_cell_quantities(state, context_, cells_);
+  refresh_cells(state);
   // make_diagnostics puts the overview first: its numbers are the columns.
   const io::Measurement overview = diagnostics_.front().diagnostic->measure(cells_, context_);
   std::vector<io::MeasuredNumber> row = {
@@ -143,7 +150,8 @@ void StatisticsSchedule::after_step(const solver::State& state, double dt,
     timeline_row(state, dt, integrator, counters);
   if (interval_ > 0.0 && state.time >= next_ - 1e-12 * interval_) {
     measure(state, false);
-    while (next_ <= state.time + 1e-12 * interval_) next_ += interval_;
+    while (next_ <= state.time + 1e-12 * interval_)
+      next_ += interval_;
   }
 }
 

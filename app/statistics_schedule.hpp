@@ -61,6 +61,8 @@ class StatisticsSchedule {
   [[nodiscard]] double wall_seconds() const { return wall_; }
 
  private:
+  void refresh_cells(const solver::State& state);
+
   std::filesystem::path folder_;
   std::vector<ScheduledDiagnostic> diagnostics_;
   physics::RunContext context_;
@@ -73,9 +75,10 @@ class StatisticsSchedule {
   int count_ = 0;
   long last_step_ = -1;
   long last_row_step_ = -1;
-  std::optional<double> initial_mechanical_;  // kinetic + magnetic energy at the start, erg
+  std::optional<double> initial_mechanical_;   // kinetic + magnetic energy at the start, erg
   std::optional<io::TimelineTable> timeline_;  // rank 0
-  physics::CellQuantities cells_;               // reused storage
+  physics::CellQuantities cells_;  // reused storage, holding the state of step cells_step_
+  long cells_step_ = -1;
   double wall_ = 0.0;
 };
 

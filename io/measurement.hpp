@@ -43,10 +43,10 @@ struct Measurement {
 inline MeasuredArray& add_array(Measurement& m, std::string name, std::string unit, double to_cgs,
                                 std::string description, std::vector<std::size_t> shape) {
   std::size_t size = 1;
-  for (const std::size_t n : shape) size *= n;
-  m.arrays.push_back(MeasuredArray{std::move(name), std::move(unit), to_cgs,
-                                   std::move(description), std::move(shape),
-                                   std::vector<double>(size, 0.0)});
+  for (const std::size_t n : shape)
+    size *= n;
+  m.arrays.push_back(MeasuredArray{std::move(name), std::move(unit), to_cgs, std::move(description),
+                                   std::move(shape), std::vector<double>(size, 0.0)});
   return m.arrays.back();
 }
 

@@ -5,26 +5,10 @@
 
 #include "physics/cooling_equilibrium.hpp"
 #include "physics/cooling_settings.hpp"
+#include "physics/diffusion_section.hpp"
 #include "solver/units/constants.hpp"
 
 namespace brume::physics {
-
-namespace {
-
-// κ(T) of the section `diffusion` in cgs (erg s^-1 cm^-1 K^-1); 0 without conduction.
-double conductivity(const config::ResolvedConfig& config, double t) {
-  const std::string& law = config.text("diffusion.conduction");
-  if (law == "constant") return config.real("diffusion.conductivity");
-  if (law == "neutral_atomic") return 2.5e3 * std::sqrt(t);  // diffusion_section.cpp's preset
-  if (law == "power_law") {
-    return config.real("diffusion.conductivity") *
-           std::pow(t / config.real("diffusion.reference_temperature"),
-                    config.real("diffusion.conductivity_exponent"));
-  }
-  return 0.0;
-}
-
-}  // namespace
 
 std::optional<FieldLengthCheck> field_length_check(const config::ResolvedConfig& config,
                                                    double cell_size) {
@@ -42,8 +26,8 @@ std::optional<FieldLengthCheck> field_length_check(const config::ResolvedConfig&
     const double n = n_first * std::pow(n_last / n_first, double(p) / (points - 1));
     const double t = equilibrium_temperature(cooling.net, n, bracket);
     if (std::isnan(t)) continue;
-    const double length = std::sqrt(conductivity(config, t) * t /
-                                    (n * n * cooling.net.lambda(t).lambda));
+    const double length =
+        std::sqrt(conductivity_cgs(config, t) * t / (n * n * cooling.net.lambda(t).lambda));
     if (length / cell_size < check.smallest_cells) {
       check.smallest_cells = length / cell_size;
       check.at_density = n;

@@ -1,5 +1,6 @@
 #include "physics/diffusion_section.hpp"
 
+#include <cmath>
 #include <string>
 
 #include "solver/units/dimension.hpp"
@@ -113,6 +114,19 @@ DiffusionCoefficients diffusion_coefficients(const config::ResolvedConfig& confi
   k.viscosity = config.real("diffusion.viscosity") / diffusivity_unit;
   k.resistivity = context.magnetic ? config.real("diffusion.resistivity") / diffusivity_unit : 0.0;
   return k;
+}
+
+double conductivity_cgs(const config::ResolvedConfig& config, double t) {
+  const std::string& law = config.text("diffusion.conduction");
+  if (law == "constant") return config.real("diffusion.conductivity");
+  if (law == "neutral_atomic")
+    return neutral_conductivity_at_1_kelvin * std::pow(t, neutral_exponent);
+  if (law == "power_law") {
+    return config.real("diffusion.conductivity") *
+           std::pow(t / config.real("diffusion.reference_temperature"),
+                    config.real("diffusion.conductivity_exponent"));
+  }
+  return 0.0;
 }
 
 int diffusion_max_stages(const config::ResolvedConfig& config) {

@@ -18,6 +18,10 @@ namespace brume::physics {
 [[nodiscard]] DiffusionCoefficients diffusion_coefficients(const config::ResolvedConfig& config,
                                                            const RunContext& context);
 
+// κ(T) of the section's conduction law in cgs (erg s^-1 cm^-1 K^-1) at temperature t (K); 0
+// without conduction.
+[[nodiscard]] double conductivity_cgs(const config::ResolvedConfig& config, double t);
+
 [[nodiscard]] int diffusion_max_stages(const config::ResolvedConfig& config);
 
 }  // namespace brume::physics

@@ -29,7 +29,7 @@ config::ResolvedConfig load(const std::vector<std::string>& overrides) {
 
 physics::RunContext context_of(const RunSetup& setup) {
   return run_context(setup, MPI_COMM_WORLD,
-                        std::make_shared<solver::BoxGhostFiller>(solver::BoxBoundaries{}));
+                     std::make_shared<solver::BoxGhostFiller>(solver::BoxBoundaries{}));
 }
 
 TEST(DiffusionConfig, OffByDefault) {

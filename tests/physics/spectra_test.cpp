@@ -21,23 +21,6 @@ using testing::spectra_box;
 using testing::spectra_context;
 using testing::SpectraCell;
 
-// MPI for this executable (the diagnostic is collective, here over MPI_COMM_SELF); guarded so
-// that another file of the folder may do the same.
-class SpectraMpi : public ::testing::Environment {
- public:
-  void SetUp() override {
-    int ready = 0;
-    MPI_Initialized(&ready);
-    if (!ready) MPI_Init(nullptr, nullptr);
-  }
-  void TearDown() override {
-    int done = 0;
-    MPI_Finalized(&done);
-    if (!done) MPI_Finalize();
-  }
-};
-const auto* const spectra_mpi = ::testing::AddGlobalTestEnvironment(new SpectraMpi);
-
 constexpr double two_pi = 2.0 * std::numbers::pi;
 
 const io::MeasuredArray& array(const io::Measurement& m, const std::string& name) {

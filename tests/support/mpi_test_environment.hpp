@@ -1,11 +1,14 @@
-// MPI for the diagnostics tests of this executable (they reduce over MPI_COMM_SELF). Initializes
-// and finalizes MPI only if nothing else in the executable did.
+// MPI for a test executable whose tests call collective code on one rank (MPI-IO, reductions over
+// MPI_COMM_SELF): initialized before the first test unless something else did, finalized after the
+// last one by whoever initialized it.
+#pragma once
+
 #include <gtest/gtest.h>
 #include <mpi.h>
 
-namespace {
+namespace brume::testing {
 
-class DiagnosticsMpiEnvironment : public ::testing::Environment {
+class MpiTestEnvironment : public ::testing::Environment {
  public:
   void SetUp() override {
     int ready = 0;
@@ -25,6 +28,4 @@ class DiagnosticsMpiEnvironment : public ::testing::Environment {
   bool owner_ = false;
 };
 
-const auto* const environment = ::testing::AddGlobalTestEnvironment(new DiagnosticsMpiEnvironment);
-
-}  // namespace
+}  // namespace brume::testing
