@@ -32,6 +32,9 @@ int dispatch(const CommandLine& line, const io::Log& log, const MpiSession& mpi)
   if (line.command == "inspect") return log.speaks() ? inspect_command(line) : exit_success;
   if (line.command == "analyze") return analyze_command(line, log);
   if (line.command == "plot") return log.speaks() ? plot_command(line) : exit_success;
+  if (line.command == "steadiness") {
+    return log.speaks() ? steadiness_command(line) : exit_success;
+  }
   return run_command(line, log, mpi);
 }
 

@@ -25,6 +25,8 @@ const std::vector<SubcommandInfo>& subcommands() {
        "measure a saved snapshot with the run's diagnostics (PDFs, spectra, maps, ...)"},
       {"plot", "RUN_FOLDER [--out DIR]",
        "draw the figures of a run folder as PNG files (time series, PDFs, spectra, maps)"},
+      {"steadiness", "RUN_FOLDER [--since TIME]",
+       "tell from a run's time series whether it is statistically steady, and since when"},
   };
   return list;
 }
@@ -48,6 +50,7 @@ std::string option_value(const std::vector<std::string>& words, std::size_t& i,
                     (option == "--set"       ? "--set SECTION.KEY=VALUE"
                      : option == "--out"     ? option + " DIR"
                      : option == "--restart" ? option + " CHECKPOINT|RUN_FOLDER"
+                     : option == "--since"   ? option + " TIME"
                                              : option + " N") +
                     ")");
   }
@@ -102,6 +105,8 @@ CommandLine parse_command_line(const std::vector<std::string>& words) {
       line.cells = option_value(words, i, "--cells");
     } else if (starts_with_option(word, "--steps")) {
       line.steps = option_value(words, i, "--steps");
+    } else if (starts_with_option(word, "--since")) {
+      line.since = option_value(words, i, "--since");
     } else if (word.size() > 1 && word[0] == '-') {
       throw UserError("command line: unknown option '" + word + "' (see brume --help)");
     } else if (line.command.empty()) {

@@ -22,6 +22,7 @@ struct CommandLine {
   bool configuration = false;        // --configuration (inspect)
   std::optional<std::string> cells;  // --cells N (bench)
   std::optional<std::string> steps;  // --steps N (bench)
+  std::optional<std::string> since;  // --since TIME (steadiness)
   io::Verbosity verbosity = io::Verbosity::normal;
 };
 

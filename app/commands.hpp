@@ -14,6 +14,7 @@ namespace brume::app {
 [[nodiscard]] int inspect_command(const CommandLine& line);
 [[nodiscard]] int analyze_command(const CommandLine& line, const io::Log& log);
 [[nodiscard]] int plot_command(const CommandLine& line);
+[[nodiscard]] int steadiness_command(const CommandLine& line);
 [[nodiscard]] int run_command(const CommandLine& line, const io::Log& log, const MpiSession& mpi);
 
 }  // namespace brume::app

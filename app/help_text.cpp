@@ -32,6 +32,8 @@ std::string help_text() {
       "  --restart PATH           `run`: continue from a checkpoint file, or from the newest\n"
       "                           checkpoint of a run folder; --set may change clock.* and "
       "output.*\n"
+      "  --since TIME             `steadiness`: start of the window judged (default: the second\n"
+      "                           half of the time series), e.g. --since 3Myr\n"
       "  --json                   machine-readable output for `bench` and `inspect`\n"
       "  --configuration          `inspect`: also print the resolved configuration in the file\n"
       "  --quiet, -q              only warnings and errors\n"
