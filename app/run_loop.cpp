@@ -16,7 +16,8 @@ RunSummary run_loop(solver::Integrator& integrator, solver::State& state, const 
   const auto start = Clock::now();
   const MPI_Comm comm = decomposition.comm();
   const auto& box_cells = decomposition.box_cells();
-  io::Progress progress(log, limits.progress_interval, limits.time_unit_name);
+  io::Progress progress(log, limits.progress_interval, limits.time_unit_name, state.step,
+                        state.time / limits.time_unit);
   const long long cells = (long long)box_cells[0] * box_cells[1] * box_cells[2];
   RunSummary summary;
   summary.box_cells = cells;
@@ -46,7 +47,8 @@ RunSummary run_loop(solver::Integrator& integrator, solver::State& state, const 
     // The last step lands on the stop time exactly, and steps land on scheduled outputs.
     const double next_output =
         hooks.next_output ? std::min(hooks.next_output(), limits.stop_time) : limits.stop_time;
-    const double dt = std::min(agreed.time_step, next_output - state.time);
+    const bool lands = agreed.time_step >= next_output - state.time;
+    const double dt = lands ? next_output - state.time : agreed.time_step;
     if (!(dt > 0.0) || !std::isfinite(dt)) {
       summary.end = RunEnd::time_step_collapse;
       summary.last_dt = dt;
@@ -54,6 +56,8 @@ RunSummary run_loop(solver::Integrator& integrator, solver::State& state, const 
     }
     const solver::StepReport report =
         solver::combine_step_reports(integrator.advance(state, dt), box_cells, comm);
+    // t + (t_out − t) can round to one ulp short of t_out, which would cost a step of 1e-16.
+    if (lands) state.time = next_output;
     summary.density_floors += report.density_floors;
     summary.pressure_floors += report.pressure_floors;
     summary.fallback_cells += report.fallback_cells;

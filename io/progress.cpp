@@ -6,12 +6,15 @@
 
 namespace brume::io {
 
-Progress::Progress(const Log& log, double interval_seconds, std::string time_unit)
+Progress::Progress(const Log& log, double interval_seconds, std::string time_unit,
+                   long long first_step, double first_time)
     : log_(log),
       interval_(interval_seconds),
       time_unit_(std::move(time_unit)),
       start_(Clock::now()),
-      last_print_(start_) {}
+      last_print_(start_),
+      last_step_(first_step),
+      first_time_(first_time) {}
 
 bool Progress::update(const ProgressSample& sample, bool force) {
   const auto now = Clock::now();
@@ -31,8 +34,9 @@ bool Progress::update(const ProgressSample& sample, bool force) {
 std::string Progress::format(const ProgressSample& s, double wall_seconds,
                              double updates_per_second) const {
   std::string eta = "?";
-  if (s.time > 0.0 && s.stop_time > s.time && wall_seconds > 0.0) {
-    eta = format_duration(wall_seconds * (s.stop_time - s.time) / s.time);
+  const double done = s.time - first_time_;
+  if (done > 0.0 && s.stop_time > s.time && wall_seconds > 0.0) {
+    eta = format_duration(wall_seconds * (s.stop_time - s.time) / done);
   } else if (s.time >= s.stop_time) {
     eta = "0 s";
   }

@@ -19,7 +19,10 @@ struct ProgressSample {
 
 class Progress {
  public:
-  Progress(const Log& log, double interval_seconds, std::string time_unit);
+  // first_step, first_time: where this process's run begins (a restart begins past zero); the
+  // rate and the time to go count from there.
+  Progress(const Log& log, double interval_seconds, std::string time_unit, long long first_step = 0,
+           double first_time = 0.0);
 
   // Called after every step; prints the first time, then when the interval has passed since the
   // last line, or always when `force`. Returns whether it printed.
@@ -37,6 +40,7 @@ class Progress {
   Clock::time_point start_;
   Clock::time_point last_print_;
   long long last_step_ = 0;
+  double first_time_ = 0.0;
   bool printed_once_ = false;
 };
 

@@ -27,3 +27,17 @@ TEST(Progress, LineCarriesStepTimeRateAndTimeToGo) {
   EXPECT_NE(line.find("1.500e+06 cell-updates/s"), std::string::npos) << line;
   EXPECT_NE(line.find("to go 1 min 30 s"), std::string::npos) << line;
 }
+
+TEST(Progress, ARestartCountsTheTimeToGoFromWhereItBegan) {
+  const brume::io::Log log(brume::io::Verbosity::quiet, false);
+  // Continued from 6 Myr: 30 s for 0.5 Myr leaves 3.5 Myr, 210 s.
+  const brume::io::Progress progress(log, 5.0, "Myr", 3000, 6.0);
+  brume::io::ProgressSample sample;
+  sample.step = 3200;
+  sample.time = 6.5;
+  sample.dt = 0.002;
+  sample.stop_time = 10.0;
+  sample.cells = 4096;
+  const std::string line = progress.format(sample, 30.0, 1.5e6);
+  EXPECT_NE(line.find("to go 3 min 30 s"), std::string::npos) << line;
+}
