@@ -107,9 +107,7 @@ double CoolingTerm::time_step_limit(const solver::State& state) const {
 }
 
 double CoolingTerm::radiated() const {
-  solver::ExactSum radiated = radiated_;
-  radiated.combine(context_.comm);
-  return radiated.value();
+  return total_over(radiated_, context_.comm);
 }
 
 std::vector<io::MeasuredNumber> CoolingTerm::budget() const {
@@ -122,11 +120,7 @@ void CoolingTerm::save(io::RunRecord& record) const {
 }
 
 void CoolingTerm::restore(const io::RunRecord& record) {
-  // Held once, by rank 0, so that the combined sum counts it once.
-  radiated_ = solver::ExactSum{};
-  int rank = 0;
-  MPI_Comm_rank(context_.comm, &rank);
-  if (rank == 0) radiated_.add(record.real("cooling.radiated"));
+  radiated_ = held_once(record.real("cooling.radiated"), context_.comm);
 }
 
 std::string CoolingTerm::report() const {

@@ -5,6 +5,7 @@
 // nothing from the checkpoint.
 #pragma once
 
+#include "physics/block_sum.hpp"
 #include "physics/cooling_settings.hpp"
 #include "physics/run_context.hpp"
 #include "physics/source_term.hpp"
@@ -39,7 +40,7 @@ class CoolingTerm final : public SourceTerm {
   long long substeps_ = 0;
   long long limited_cells_ = 0;
   long long fast_path_cells_ = 0;         // kept the Rosenbrock steps (fast path)
-  solver::ExactSum radiated_;             // net energy lost by the gas, erg
+  BlockSum radiated_;                     // net energy lost by the gas, erg
   [[nodiscard]] double radiated() const;  // collective
 };
 

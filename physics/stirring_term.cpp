@@ -10,23 +10,6 @@ namespace brume::physics {
 
 namespace {
 
-// A block on its own (unit tests without MPI) needs no combination; otherwise every rank of the
-// communicator takes part (MPI_Initialized and MPI_Finalized may be called at any time).
-bool mpi_running() {
-  int initialized = 0, finalized = 0;
-  MPI_Initialized(&initialized);
-  MPI_Finalized(&finalized);
-  return initialized != 0 && finalized == 0;
-}
-
-// The exact total over every block of `comm`.
-double combined(BlockSum& block, MPI_Comm comm) {
-  solver::ExactSum sum;
-  block.add_to(sum);
-  if (mpi_running()) sum.combine(comm);
-  return sum.value();
-}
-
 StirringProcess make_process(const StirringSettings& settings, const RunContext& context,
                              const StirringScales& scales) {
   const std::array<bool, 3> active{context.box_cells[0] > 1, context.box_cells[1] > 1,
@@ -74,9 +57,9 @@ void StirringTerm::advance(solver::State& state, double dt) {
       }
     }
   }
-  const double total_mass = combined(mass, context_.comm);
+  const double total_mass = total_over(mass, context_.comm);
   for (std::size_t d = 0; d < 3; ++d)
-    removed_mean_[d] = combined(pull[d], context_.comm) / total_mass;
+    removed_mean_[d] = total_over(pull[d], context_.comm) / total_mass;
   const double volume = g.spacing[0] * g.spacing[1] * g.spacing[2];
   std::array<double*, 3> m{state.momentum[0].data(), state.momentum[1].data(),
                            state.momentum[2].data()};
@@ -103,8 +86,7 @@ void StirringTerm::advance(solver::State& state, double dt) {
 }
 
 double StirringTerm::work() const {
-  BlockSum block = work_;
-  return combined(block, context_.comm);
+  return total_over(work_, context_.comm);
 }
 
 void StirringTerm::save(io::RunRecord& record) const {
@@ -118,11 +100,7 @@ void StirringTerm::restore(const io::RunRecord& record) {
   process_.restore(record.array("forcing.amplitudes"),
                    static_cast<std::uint64_t>(record.integer("forcing.next_pair")));
   stirred_time_ = record.real("forcing.stirred_time");
-  // The work so far is held once, by rank 0, so that the combined sum counts it once.
-  work_ = BlockSum{};
-  int rank = 0;
-  if (mpi_running()) MPI_Comm_rank(context_.comm, &rank);
-  if (rank == 0) work_.add(record.real("forcing.work"));
+  work_ = held_once(record.real("forcing.work"), context_.comm);
 }
 
 std::vector<io::MeasuredNumber> StirringTerm::budget() const {

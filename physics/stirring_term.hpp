@@ -8,9 +8,9 @@
 #include <optional>
 #include <string>
 
+#include "physics/block_sum.hpp"
 #include "physics/run_context.hpp"
 #include "physics/source_term.hpp"
-#include "physics/stirring_block_sum.hpp"
 #include "physics/stirring_field.hpp"
 #include "physics/stirring_process.hpp"
 #include "physics/stirring_settings.hpp"

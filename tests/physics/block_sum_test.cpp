@@ -1,13 +1,13 @@
-// The stirring's fast block-local exact sum gives the same bits as solver::ExactSum, the shared
-// exact accumulator (Kulisch & Miranker 1986, SIAM Review 28, 1, for the idea), over values of
-// every sign and magnitude, subnormals included, and sums that cancel exactly. Tolerance: none.
+// The fast block-local exact sum of the source terms gives the same bits as solver::ExactSum, the
+// shared exact accumulator (Kulisch & Miranker 1986, SIAM Review 28, 1, for the idea), over values
+// of every sign and magnitude, subnormals included, and sums that cancel exactly. Tolerance: none.
 #include <gtest/gtest.h>
 
 #include <cmath>
 #include <limits>
 #include <vector>
 
-#include "physics/stirring_block_sum.hpp"
+#include "physics/block_sum.hpp"
 #include "physics/stirring_random.hpp"
 
 namespace brume::physics {
@@ -29,7 +29,7 @@ double through_exact(const std::vector<double>& values) {
   return sum.value();
 }
 
-TEST(StirringBlockSum, MatchesTheSharedExactSum) {
+TEST(BlockSum, MatchesTheSharedExactSum) {
   std::vector<double> values;
   for (std::uint64_t n = 0; n < 20000; ++n) {
     const NormalPair z = stirring_normal_pair(3, n);
@@ -46,7 +46,7 @@ TEST(StirringBlockSum, MatchesTheSharedExactSum) {
   EXPECT_EQ(through_block(small), through_exact(small));
 }
 
-TEST(StirringBlockSum, CancelsExactly) {
+TEST(BlockSum, CancelsExactly) {
   // 1e16 + 1 − 1e16 is 1 exactly, and x − x is 0, where a double sum loses the 1.
   EXPECT_EQ(through_block({1e16, 1.0, -1e16}), 1.0);
   EXPECT_EQ(through_block({-3.5, 1e-300, 3.5, -1e-300}), 0.0);

@@ -12,6 +12,8 @@
 #include <cstdint>
 #include <limits>
 
+#include <mpi.h>
+
 #include "solver/exact_sum.hpp"
 
 namespace brume::physics {
@@ -88,5 +90,32 @@ class BlockSum {
   bool non_finite_ = false;
   long pending_ = 0;
 };
+
+// Whether MPI is running (MPI_Initialized and MPI_Finalized may be called at any time): a block
+// on its own, in unit tests without MPI, needs no combination.
+inline bool mpi_is_running() {
+  int initialized = 0, finalized = 0;
+  MPI_Initialized(&initialized);
+  MPI_Finalized(&finalized);
+  return initialized != 0 && finalized == 0;
+}
+
+// The exact total of `block` over every rank of `comm`.
+inline double total_over(BlockSum block, MPI_Comm comm) {
+  solver::ExactSum sum;
+  block.add_to(sum);
+  if (mpi_is_running()) sum.combine(comm);
+  return sum.value();
+}
+
+// A block sum that holds `value` on the first rank of `comm` only, so that the total counts it
+// once (a total carried over from a checkpoint).
+inline BlockSum held_once(double value, MPI_Comm comm) {
+  BlockSum block;
+  int rank = 0;
+  if (mpi_is_running()) MPI_Comm_rank(comm, &rank);
+  if (rank == 0) block.add(value);
+  return block;
+}
 
 }  // namespace brume::physics
