@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # Sets brume up (dependencies, configure, build) and runs the main job on every core of this machine:
 # the demo box of problems/ (driven two-phase MHD turbulence), writing into a new run folder under
-# runs/, and draws its figures into the folder's figures/.
+# runs/, draws its figures into the folder's figures/ and judges from its time series whether the
+# box is statistically steady after its first 4 Myr.
 #   scripts/run-demo.sh [extra brume run options, e.g. --set clock.stop_time=2Myr]
 set -euo pipefail
 here=$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)
@@ -15,4 +16,5 @@ out="$here/runs/demo-$(date +%Y%m%d-%H%M%S)"
 echo "brume: running $config on $ranks cores into $out"
 mpiexec -n "$ranks" "$here/build/release/bin/brume" run "$config" --out "$out" "$@"
 "$here/build/release/bin/brume" plot "$out"
+"$here/build/release/bin/brume" steadiness "$out" --since 4Myr || echo "brume: steadiness not judged (see the message above)"
 echo "brume: outputs are in $out, figures in $out/figures"

@@ -6,6 +6,7 @@
 #include <cstdio>
 #include <sstream>
 #include <string>
+#include <utility>
 #include <vector>
 
 #include "physics/cooling_cell_integrator.hpp"
@@ -54,24 +55,31 @@ TEST(CoolingCellIntegrator, MatchesScipyRadau) {
       brume::testing::source_script("tests/physics/cooling_reference.py"), arguments);
   ASSERT_EQ(reference.exit_code, 0) << reference.output;
   std::istringstream lines(reference.output);
-  const CellCooler<KoyamaInutsukaFit> cooler(fit, net.heating, (gamma - 1.0) / k_b,
-                                             CellCoolingLimits{});
-  double worst = 0.0;
-  for (std::size_t i = 0; i < cases.size(); ++i) {
-    double expected = 0.0;
-    ASSERT_TRUE(lines >> expected) << reference.output;
-    const CellCoolingResult r = cooler.advance(cases[i].n, cases[i].t0, durations[i]);
-    const double error = std::fabs(r.temperature - expected) / expected;
-    worst = std::fmax(worst, error);
-    std::printf(
-        "[cooling vs Radau] n %g T0 %g t/t_cool %g: T %.10g, scipy %.10g, rel. error "
-        "%.2e, %ld sub-steps\n",
-        cases[i].n, cases[i].t0, cases[i].periods, r.temperature, expected, error, r.substeps);
-    // 1e-4 relative, the brief's tolerance; scipy's Radau at rtol 1e-12 is far more accurate,
-    // so the difference is brume's error (local tolerance 1e-6 per sub-step).
-    EXPECT_LT(error, 1e-4) << "case " << i;
+  std::vector<double> expected(cases.size());
+  for (double& e : expected)
+    ASSERT_TRUE(lines >> e) << reference.output;
+  // Scipy's Radau at rtol 1e-12 is far more accurate than brume, so the difference is brume's
+  // error. At the default sub-step tolerance 1e-6 it must stay within 1e-4 relative, the brief's
+  // bound (measured: 1.1e-6); at 1e-4, as problems/demo.yaml sets it, within 2e-4 (measured:
+  // 9.4e-5, with ten times fewer sub-steps).
+  for (const auto& [tolerance, bound] : {std::pair{1e-6, 1e-4}, std::pair{1e-4, 2e-4}}) {
+    CellCoolingLimits limits;
+    limits.tolerance = tolerance;
+    const CellCooler<KoyamaInutsukaFit> cooler(fit, net.heating, (gamma - 1.0) / k_b, limits);
+    double worst = 0.0;
+    for (std::size_t i = 0; i < cases.size(); ++i) {
+      const CellCoolingResult r = cooler.advance(cases[i].n, cases[i].t0, durations[i]);
+      const double error = std::fabs(r.temperature - expected[i]) / expected[i];
+      worst = std::fmax(worst, error);
+      std::printf(
+          "[cooling vs Radau] tolerance %g, n %g T0 %g t/t_cool %g: T %.10g, scipy %.10g, rel. "
+          "error %.2e, %ld sub-steps\n",
+          tolerance, cases[i].n, cases[i].t0, cases[i].periods, r.temperature, expected[i], error,
+          r.substeps);
+      EXPECT_LT(error, bound) << "tolerance " << tolerance << ", case " << i;
+    }
+    std::printf("[cooling vs Radau] tolerance %g: largest relative error %.2e\n", tolerance, worst);
   }
-  std::printf("[cooling vs Radau] largest relative error %.2e\n", worst);
 }
 
 // A cooling time 1e-6 of the step: the implicit sub-steps must neither go below zero (or the
