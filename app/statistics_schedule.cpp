@@ -95,9 +95,19 @@ void StatisticsSchedule::measure(const solver::State& state, bool everything) {
   header.step = state.step;
   const std::filesystem::path file = folder_ / statistics_name(count_++);
   on_rank_zero_writing(context_.comm, [&] { io::write_statistics(file, header, results); });
+  // Each warning is printed the first time only; every statistics file keeps its own.
   for (const io::Measurement& m : results) {
-    for (const std::string& w : m.warnings)
-      log_.warning(m.name + ": " + w);
+    for (const std::string& w : m.warnings) {
+      const std::string text = m.name + ": " + w;
+      if (printed_warnings_.insert(text).second) {
+        log_.warning(text);
+      } else if (!said_repeats_) {
+        said_repeats_ = true;
+        log_.info(
+            "brume: statistics warnings that repeat are not printed again; each statistics "
+            "file keeps its own (attribute `warnings` of each group)");
+      }
+    }
   }
   log_.detail("brume: wrote " + file.string());
 }

@@ -8,6 +8,7 @@
 
 #include <filesystem>
 #include <optional>
+#include <set>
 #include <string>
 #include <vector>
 
@@ -80,6 +81,8 @@ class StatisticsSchedule {
   physics::CellQuantities cells_;  // reused storage, holding the state of step cells_step_
   long cells_step_ = -1;
   double wall_ = 0.0;
+  std::set<std::string> printed_warnings_;  // warnings the log has shown (rank 0 prints)
+  bool said_repeats_ = false;
 };
 
 }  // namespace brume::app
