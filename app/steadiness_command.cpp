@@ -97,12 +97,14 @@ void print_report(const fs::path& table_file, const physics::SteadinessReport& r
   const std::string& u = r.time_unit;
   std::printf("brume steadiness: %s, window %s to %s %s (%zu rows)\n", table_file.c_str(),
               number(r.window_start).c_str(), number(r.window_end).c_str(), u.c_str(), r.rows);
-  std::printf("  %-40s %12s %11s %11s %11s %11s  %s\n", "column [unit]", "mean", "scatter", "drift",
-              "+-error", "allowed", "verdict");
+  std::printf("  %-40s %12s %11s %11s %11s %11s  %-9s  %s\n", "column [unit]", "mean", "scatter",
+              "drift", "+-error", "allowed", "verdict", "steady since");
   for (const physics::ColumnTrend& c : r.columns) {
     const std::string label = c.name + " [" + c.unit + "]";
-    std::printf("  %-40s %12.5g %11.4g %+11.4g %11.4g %11.4g  %s\n", label.c_str(), c.mean,
-                c.scatter, c.drift, c.drift_error, c.allowed, physics::trend_name(c.trend()));
+    const std::string since = c.steady_since ? number(*c.steady_since) + " " + u : "-";
+    std::printf("  %-40s %12.5g %11.4g %+11.4g %11.4g %11.4g  %-9s  %s\n", label.c_str(), c.mean,
+                c.scatter, c.drift, c.drift_error, c.allowed, physics::trend_name(c.trend()),
+                since.c_str());
   }
   for (const std::string& name : r.skipped)
     std::printf("  %-40s (absent, not finite or zero throughout: not judged)\n", name.c_str());

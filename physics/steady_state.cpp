@@ -2,17 +2,19 @@
 
 #include <algorithm>
 #include <cmath>
+#include <limits>
 #include <stdexcept>
 
 namespace brume::physics {
 
 const std::vector<WatchedColumn>& watched_columns() {
+  constexpr double none = std::numeric_limits<double>::infinity();
   static const std::vector<WatchedColumn> columns = {
-      {"velocity_rms_mass", false, 0.05},     {"sonic_mach_mass", false, 0.05},
-      {"alfven_mach_mass", false, 0.05},      {"magnetic_energy_fluctuating", false, 0.10},
-      {"cold_volume_fraction", true, 0.02},   {"unstable_volume_fraction", true, 0.02},
-      {"warm_volume_fraction", true, 0.02},   {"cold_mass_fraction", true, 0.02},
-      {"unstable_mass_fraction", true, 0.02}, {"warm_mass_fraction", true, 0.02},
+      {"velocity_rms_mass", none, 0.05},      {"sonic_mach_mass", none, 0.05},
+      {"alfven_mach_mass", none, 0.05},       {"magnetic_energy_fluctuating", none, 0.10},
+      {"cold_volume_fraction", 0.02, 0.10},   {"unstable_volume_fraction", 0.02, 0.10},
+      {"warm_volume_fraction", 0.02, 0.10},   {"cold_mass_fraction", 0.02, 0.10},
+      {"unstable_mass_fraction", 0.02, 0.10}, {"warm_mass_fraction", 0.02, 0.10},
   };
   return columns;
 }
@@ -30,6 +32,8 @@ const char* trend_name(Trend trend) {
 }
 
 Trend ColumnTrend::trend() const {
+  // A value that is not finite in the window (a field that starts at zero) cannot be judged.
+  if (!std::isfinite(drift) || !std::isfinite(drift_error)) return Trend::undecided;
   if (!(std::fabs(drift) > allowed)) return Trend::steady;
   return std::fabs(drift) > 2.0 * drift_error ? Trend::drifting : Trend::undecided;
 }
@@ -117,7 +121,7 @@ std::vector<ColumnTrend> trends(const io::TimelineText& table, const std::vector
     c.scatter = fit.scatter;
     c.drift = fit.slope * length;
     c.drift_error = fit.slope_error * length;
-    c.allowed = w.rule.absolute ? w.rule.allowance : w.rule.allowance * std::fabs(fit.mean);
+    c.allowed = std::fmin(w.rule.absolute, w.rule.relative * std::fabs(fit.mean));
     out.push_back(c);
   }
   return out;
@@ -171,13 +175,21 @@ SteadinessReport judge_steadiness(const io::TimelineText& table, std::optional<d
   }
   if (watched.empty()) throw std::invalid_argument("the table has none of the watched columns");
   report.columns = trends(table, watched, time_column, first);
+  // The earliest steady start of each column and of all of them.
   for (std::size_t s = 0; s <= first; ++s) {
     if (table.rows.size() - s < least_rows) break;
-    if (table.rows[s][time_column] >= table.rows.back()[time_column]) break;
-    if (all_steady(trends(table, watched, time_column, s))) {
-      report.steady_since = table.rows[s][time_column];
-      break;
+    const double t_s = table.rows[s][time_column];
+    if (t_s >= table.rows.back()[time_column]) break;
+    const std::vector<ColumnTrend> from_s = trends(table, watched, time_column, s);
+    bool all_found = true;
+    for (std::size_t j = 0; j < from_s.size(); ++j) {
+      if (!report.columns[j].steady_since && from_s[j].steady()) {
+        report.columns[j].steady_since = t_s;
+      }
+      all_found = all_found && report.columns[j].steady_since.has_value();
     }
+    if (!report.steady_since && all_steady(from_s)) report.steady_since = t_s;
+    if (all_found && report.steady_since) break;
   }
   return report;
 }

@@ -2,7 +2,8 @@
 //
 // Each watched column y(t) of the window gets a least-squares line y = a + b t; its drift is
 // b times the window's length. A column is steady when the drift stays within its allowance:
-// an absolute 0.02 for the phase fractions, 5 % of the window's mean for speeds and Mach numbers,
+// for the phase fractions 0.02 or 10 % of the window's mean, whichever is smaller (a small
+// fraction may not double unnoticed), 5 % of the window's mean for speeds and Mach numbers,
 // 10 % for the fluctuating magnetic energy (common practice, no source). Beyond it, the drift
 // counts as drifting only when it also exceeds twice its standard error, the error of the slope
 // inflated by the residuals' autocorrelation, 1 + 2 Σ ρ_k summed up to the first ρ_k ≤ 0
@@ -22,8 +23,8 @@ namespace brume::physics {
 
 struct WatchedColumn {
   const char* name;  // timeline column
-  bool absolute;     // allowance in the column's unit (true) or relative to the mean
-  double allowance;  // largest |drift| over the window
+  double absolute;   // largest |drift| in the column's unit (infinity: none)
+  double relative;   // largest |drift| as a fraction of the window's mean
 };
 
 // The columns brume watches, in report order.
@@ -36,10 +37,11 @@ struct ColumnTrend {
   std::string name;
   std::string unit;
   double mean = 0.0;
-  double scatter = 0.0;      // rms of the residuals about the line
-  double drift = 0.0;        // slope times the window's length
-  double drift_error = 0.0;  // standard error of the drift, autocorrelation included
-  double allowed = 0.0;      // the largest |drift| counted as steady
+  double scatter = 0.0;                // rms of the residuals about the line
+  double drift = 0.0;                  // slope times the window's length
+  double drift_error = 0.0;            // standard error of the drift, autocorrelation included
+  double allowed = 0.0;                // the largest |drift| counted as steady
+  std::optional<double> steady_since;  // earliest start t_s ≤ since with this column steady
   [[nodiscard]] Trend trend() const;
   [[nodiscard]] bool steady() const { return trend() == Trend::steady; }
 };

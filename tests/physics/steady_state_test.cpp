@@ -7,6 +7,7 @@
 
 #include <cmath>
 #include <cstdio>
+#include <limits>
 #include <sstream>
 #include <stdexcept>
 #include <string>
@@ -106,13 +107,15 @@ TEST(SteadyState, EarliestSteadyStartMatchesANumpyScan) {
   std::printf("[steadiness vs numpy scan] steady since %.6g Myr (numpy %.6g Myr)\n",
               *r.steady_since, expected);
   EXPECT_EQ(*r.steady_since, expected);
+  ASSERT_TRUE(r.columns.front().steady_since.has_value());
+  EXPECT_EQ(*r.columns.front().steady_since, expected);  // one column: its own start is the same
   // The ramp ends at 2 Myr: the earliest steady start lies past its middle, and before 3 Myr.
   EXPECT_GT(*r.steady_since, 1.0);
   EXPECT_LT(*r.steady_since, 3.0);
   EXPECT_TRUE(r.steady());
   ASSERT_EQ(r.columns.size(), 1u);
   EXPECT_EQ(r.columns[0].name, "warm_volume_fraction");
-  EXPECT_EQ(r.columns[0].allowed, 0.02);  // absolute, for a phase fraction
+  EXPECT_EQ(r.columns[0].allowed, 0.02);  // 0.02 for a phase fraction of 0.5 (10 % would be 0.05)
 }
 
 TEST(SteadyState, ATrendBeyondTheAllowanceDrifts) {
@@ -129,6 +132,55 @@ TEST(SteadyState, ATrendBeyondTheAllowanceDrifts) {
   EXPECT_FALSE(r.columns[0].steady());
   EXPECT_EQ(r.trend(), Trend::drifting);
   EXPECT_FALSE(r.steady_since.has_value());
+}
+
+TEST(SteadyState, EachColumnHasItsOwnEarliestSteadyStart) {
+  // A fraction that settles by 1 Myr and a speed that settles only by 3 Myr: the fraction is
+  // steady from before 2 Myr, the speed from after it, and the whole table from the later one.
+  const std::vector<double> t = times(121, 8.0);
+  io::TimelineText tab = table("cold_mass_fraction", t, std::vector<double>(t.size()));
+  tab.names.push_back("velocity_rms_mass");
+  tab.units.push_back("km/s");
+  for (std::size_t i = 0; i < t.size(); ++i) {
+    tab.rows[i][2] = 0.4 - 0.3 * std::fmax(0.0, 1.0 - t[i]) + 0.002 * wiggle(t[i]);
+    tab.rows[i].push_back(3.0 + 2.0 * std::fmax(0.0, 1.0 - t[i] / 3.0) + 0.01 * wiggle(t[i]));
+  }
+  const SteadinessReport r = judge_steadiness(tab, 4.0);
+  ASSERT_EQ(r.columns.size(), 2u);
+  const ColumnTrend& speed = r.columns[0];  // watched_columns() order: speeds first
+  const ColumnTrend& cold = r.columns[1];
+  ASSERT_EQ(speed.name, "velocity_rms_mass");
+  ASSERT_TRUE(speed.steady_since && cold.steady_since && r.steady_since);
+  std::printf("[steadiness] steady since: fraction %.4g, speed %.4g, all %.4g Myr\n",
+              *cold.steady_since, *speed.steady_since, *r.steady_since);
+  EXPECT_LT(*cold.steady_since, 2.0);
+  EXPECT_GT(*speed.steady_since, 2.0);
+  EXPECT_EQ(*r.steady_since, std::fmax(*cold.steady_since, *speed.steady_since));
+}
+
+TEST(SteadyState, ASmallFractionHasATenthOfItsMeanAsAllowance) {
+  // A cold volume fraction that grows from 0.03 to 0.05 over the window: within 0.02, but not
+  // within 10 % of its mean (0.004).
+  const std::vector<double> t = times(61, 6.0);
+  std::vector<double> y;
+  for (const double s : t)
+    y.push_back(0.03 + 0.02 * std::fmax(0.0, s - 3.0) / 3.0);
+  const SteadinessReport r = judge_steadiness(table("cold_volume_fraction", t, y), 3.0);
+  ASSERT_EQ(r.columns.size(), 1u);
+  EXPECT_NEAR(r.columns[0].allowed, 0.1 * r.columns[0].mean, 1e-15);
+  EXPECT_EQ(r.columns[0].trend(), Trend::drifting);
+}
+
+TEST(SteadyState, ANonFiniteValueIsNotJudgedSteady) {
+  // A Mach number that is infinite in the first rows (no field yet): a window that holds them
+  // is undecided, so the earliest steady start lies after them.
+  const std::vector<double> t = times(61, 6.0);
+  std::vector<double> y(t.size(), 2.0);
+  for (std::size_t i = 0; i < 5; ++i)
+    y[i] = std::numeric_limits<double>::infinity();
+  const SteadinessReport r = judge_steadiness(table("alfven_mach_mass", t, y), 3.0);
+  ASSERT_TRUE(r.steady_since.has_value());
+  EXPECT_EQ(*r.steady_since, t[5]);
 }
 
 TEST(SteadyState, FluctuationsTooSlowForTheWindowLeaveItUndecided) {
