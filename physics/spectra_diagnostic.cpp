@@ -204,7 +204,7 @@ io::Measurement SpectraDiagnostic::measure(const CellQuantities& q,
 
   const double fundamental = 2.0 * std::numbers::pi / shells.longest_edge;  // code units
   io::MeasuredArray& k = io::add_array(
-      m, "wavenumber", "cm^-1", fundamental / u.length,
+      m, "wavenumber", "2pi/L", fundamental / u.length,
       "shell k = floor(|k| L / (2 pi) + 1/2), L the longest box edge: the values are in units "
       "of 2 pi / L; to_cgs turns them into cm^-1",
       {n_shells});
@@ -215,14 +215,16 @@ io::Measurement SpectraDiagnostic::measure(const CellQuantities& q,
                     "number of Fourier modes (full spectrum) in each shell", {n_shells});
   for (std::size_t s = 0; s < n_shells; ++s)
     count.values[s] = double(shells.mode_count[s]);
+  // Stored in cgs, the unit named (the sums ran in code units).
   for (std::size_t i = 0; i < sums.spectra().size(); ++i) {
     const Spectrum& sp = sums.spectra()[i];
     io::MeasuredArray& a =
-        io::add_array(m, sp.name, sp.unit, sp.to_cgs, sp.description + "; " + parseval, {n_shells});
+        io::add_array(m, sp.name, sp.unit, 1.0, sp.description + "; " + parseval, {n_shells});
     const std::span<double> shell_values = sums.shells(i);
-    std::copy(shell_values.begin(), shell_values.end(), a.values.begin());
+    std::transform(shell_values.begin(), shell_values.end(), a.values.begin(),
+                   [&](double v) { return v * sp.to_cgs; });
   }
-  add_number(m, "fundamental_wavenumber", fundamental, "cm^-1", 1.0 / u.length,
+  add_number(m, "fundamental_wavenumber", fundamental / u.length, "cm^-1", 1.0,
              "2 pi / L, L the longest box edge: the unit of wavenumber");
   if (fields_.velocity) {
     const std::span<double> sol = sums.shells(solenoidal), comp = sums.shells(compressive);
@@ -245,7 +247,7 @@ io::Measurement SpectraDiagnostic::measure(const CellQuantities& q,
     add_number(m, "velocity_compressive_to_solenoidal",
                total_sol > 0.0 ? total_comp / total_sol : nan, "1", 1.0,
                "compressive / solenoidal velocity power, all k > 0");
-    add_number(m, "velocity_mean_flow_power", mean_flow, "cm^2 s^-2", v2,
+    add_number(m, "velocity_mean_flow_power", mean_flow * v2, "cm^2 s^-2", 1.0,
                "(1/2) |<v>|^2: the k = 0 power, in velocity_power but in neither part");
   }
   if (fields_.magnetic && !context.magnetic) {

@@ -232,6 +232,12 @@ io::Measurement StructureFunctions::measure(const CellQuantities& q,
     count[l] = double(pooled_pairs[l]);
   }
   fit_size_linewidth(m, s, lags, pooled_sigma, pooled_pairs);
+  // Summed in code units, stored in cgs: the `unit` of each array is that of its values.
+  for (io::MeasuredArray& a : m.arrays) {
+    for (double& v : a.values)
+      v *= a.to_cgs;
+    a.to_cgs = 1.0;
+  }
   return m;
 }
 

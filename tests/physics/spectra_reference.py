@@ -9,8 +9,10 @@ Usage:
                                                   density, momentum_*, face_field_*), spectra
                                                   from what `brume analyze` wrote
 
-Prints the largest relative error of each array and exits 1 when one exceeds 1e-10 (relative to
-the array's largest magnitude).
+brume stores the spectra in cgs (the `unit` of each dataset); the reference is computed from the
+fields in code units and converted with the snapshot's own factors (in `fields` mode the code
+units are cgs). Prints the largest relative error of each array and exits 1 when one exceeds
+1e-10 (relative to the array's largest magnitude).
 """
 import itertools
 import sys
@@ -27,7 +29,7 @@ def fields_from_test_file(stats):
     v = [g["velocity_" + a][...] for a in "xyz"]
     b = [g["field_" + a][...] for a in "xyz"]
     size = [float(g["box_size_" + a][()]) for a in "xyz"]
-    return rho, v, b, size, True
+    return rho, v, b, size, True, {"density": 1.0, "velocity": 1.0}
 
 
 def fields_from_snapshot(path):
@@ -48,11 +50,20 @@ def fields_from_snapshot(path):
                     face = 0.5 * (lo + hi)
                 b.append(face)
         size = [float(s) for s in f.attrs["size"]]
-    return rho, v, b, size, magnetic
+        density_unit = float(g["density"].attrs["to_cgs"])
+        velocity_unit = float(g["momentum_x"].attrs["to_cgs"]) / density_unit
+    return rho, v, b, size, magnetic, {"density": density_unit, "velocity": velocity_unit}
 
 
-def check(rho, v, b, size, magnetic, spectra):
+def check(rho, v, b, size, magnetic, units, spectra):
     """Compares the group `spectra` with numpy; prints the errors, returns True when all pass."""
+    du, vu = units["density"], units["velocity"]
+    # cgs per code unit of each spectrum (B_G^2/8pi = B_code^2/2 rho_u v_u^2).
+    to_cgs = {"velocity_power": vu**2, "velocity_solenoidal_power": vu**2,
+              "velocity_compressive_power": vu**2, "velocity_mean_flow_power": vu**2,
+              "kinetic_energy_power": du * vu**2, "magnetic_field_power": du * vu**2,
+              "cube_root_weighted_velocity_power": du ** (2.0 / 3.0) * vu**2,
+              "density_power": du**2}
     nz, ny, nx = rho.shape
     n = rho.size
     longest = max(size)
@@ -113,6 +124,7 @@ def check(rho, v, b, size, magnetic, spectra):
     worst = 0.0
     failed = False
     for name, expected in reference.items():
+        expected = expected * to_cgs.get(name, 1.0)
         got = spectra[name][...]
         if got.shape != expected.shape:
             print(f"{name}: shape {got.shape}, expected {expected.shape}")
@@ -124,11 +136,16 @@ def check(rho, v, b, size, magnetic, spectra):
         print(f"{name}: largest relative error {error:.3e}")
         failed |= not error <= TOLERANCE
     for name, expected in numbers.items():
+        expected = expected * to_cgs.get(name, 1.0)
         got = float(spectra[name][()])
         error = abs(got - expected) / abs(expected)
         worst = max(worst, error)
         print(f"{name}: {got:.15g} vs {expected:.15g}, relative error {error:.3e}")
         failed |= not error <= TOLERANCE
+    for name in to_cgs:  # stored in cgs: nothing left to convert
+        if name in spectra and float(spectra[name].attrs["to_cgs"]) != 1.0:
+            print(f"{name}: to_cgs {spectra[name].attrs['to_cgs']}, expected 1 (values in cgs)")
+            failed = True
     ratio = spectra["velocity_compressive_ratio"][...]
     with np.errstate(invalid="ignore"):  # 0/0 in an empty shell: NaN, as brume writes
         expected_ratio = reference["velocity_compressive_power"] / (
