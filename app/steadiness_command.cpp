@@ -59,8 +59,7 @@ std::string read_file(const fs::path& path) {
 // there to say (nothing otherwise).
 struct RunScales {
   std::optional<double> correlation_time;
-  std::optional<double> box_length;  // code length, with the code velocity below
-  double velocity_unit = 0.0;        // cm/s of one code velocity
+  std::optional<double> box_length;  // longest side, code length
   double length_unit = 0.0;          // cm of one code length
   double time_unit = 0.0;            // s of one table time unit
 };
@@ -75,7 +74,6 @@ RunScales run_scales(const fs::path& folder, const std::string& time_unit) {
   const auto seconds = table.ok ? units::factor_to(table.unit, units::dim::time) : std::nullopt;
   if (!seconds) return s;
   s.time_unit = *seconds;
-  s.velocity_unit = setup.code_units.velocity;
   s.length_unit = setup.code_units.length;
   s.box_length = std::max({setup.size[0], setup.size[1], setup.size[2]});
   if (physics::stirring_enabled(config)) {
@@ -131,9 +129,13 @@ void print_report(const fs::path& table_file, const physics::SteadinessReport& r
         number(window).c_str(), u.c_str(), number(*scales.correlation_time).c_str(), u.c_str());
   }
   for (const physics::ColumnTrend& c : r.columns) {
-    if (c.name != "velocity_rms_mass" || !scales.box_length || c.unit != "km/s") continue;
+    if (c.name != "velocity_rms_mass" || !scales.box_length) continue;
+    const units::UnitParse speed = units::parse_unit(c.unit);
+    const auto cm_per_s =
+        speed.ok ? units::factor_to(speed.unit, units::dim::velocity) : std::nullopt;
+    if (!cm_per_s) continue;
     const double crossing =
-        *scales.box_length * scales.length_unit / (c.mean * 1e5) / scales.time_unit;
+        *scales.box_length * scales.length_unit / (c.mean * *cm_per_s) / scales.time_unit;
     if (window < crossing) {
       std::printf(
           "note: the window (%s %s) is shorter than one crossing time of the box L / v_rms "
@@ -156,9 +158,10 @@ int steadiness_command(const CommandLine& line) {
   const fs::path folder = line.positional.front();
   if (!fs::is_directory(folder)) throw UserError(folder.string() + ": no such run folder");
   const fs::path table_file = folder / "timeline.txt";
+  const std::string text = read_file(table_file);
   io::TimelineText table;
   try {
-    table = io::read_timeline_text(read_file(table_file), std::numeric_limits<long>::max());
+    table = io::read_timeline_text(text, std::numeric_limits<long>::max());
   } catch (const std::runtime_error& e) {
     throw UserError(table_file.string() + ": " + e.what());
   }
