@@ -1,8 +1,7 @@
 // Heating and cooling as an operator-split source term: each cell's thermal energy (total minus
 // kinetic and magnetic) follows de/dt = −(n²Λ(T) − nΓ) at constant density over the half step,
 // integrated by physics::CellCooler (cooling_cell_integrator.hpp). Density, momentum and field are
-// untouched. The term holds no state of its own beyond report counters, so a restart needs
-// nothing from the checkpoint.
+// untouched. Beyond report counters it holds the net energy radiated, which checkpoints keep.
 #pragma once
 
 #include "physics/block_sum.hpp"
