@@ -1,8 +1,6 @@
 #include "app/run_restart.hpp"
 
 #include <filesystem>
-#include <fstream>
-#include <sstream>
 #include <string>
 #include <system_error>
 #include <vector>
@@ -58,14 +56,12 @@ void set_aside_later_outputs(const fs::path& folder, const io::RunRecord& record
   // a copy of its table goes aside too (the run then rewrites the table with the rows it keeps).
   const fs::path timeline = folder / "timeline.txt";
   bool copy_timeline = false;
-  if (std::ifstream in(timeline); in) {
-    std::stringstream text;
-    text << in.rdbuf();
-    try {
-      copy_timeline = io::read_timeline_text(text.str(), step).dropped_rows;
-    } catch (const std::runtime_error& bad) {
-      throw UserError("--restart: " + timeline.string() + ": " + bad.what());
+  try {
+    if (const auto table = io::read_timeline_file(timeline, step)) {
+      copy_timeline = table->dropped_rows;
     }
+  } catch (const std::runtime_error& bad) {
+    throw UserError(std::string("--restart: ") + bad.what());
   }
   if (later.empty() && !copy_timeline) return;
   const fs::path aside = folder / ("superseded-at-step" + std::to_string(step));

@@ -5,10 +5,8 @@
 #include <cmath>
 #include <cstdio>
 #include <filesystem>
-#include <fstream>
 #include <limits>
 #include <optional>
-#include <sstream>
 #include <stdexcept>
 #include <string>
 
@@ -19,6 +17,7 @@
 #include "app/user_error.hpp"
 #include "io/config/error.hpp"
 #include "io/config/load.hpp"
+#include "io/config/number_text.hpp"
 #include "physics/steady_state.hpp"
 #include "physics/stirring_settings.hpp"
 #include "solver/units/dimension.hpp"
@@ -44,14 +43,6 @@ double since_in(const std::string& text, const std::string& time_unit) {
     throw UserError("command line: --since " + text + ": expected a time, e.g. 3Myr " + usage);
   }
   return q.number * *given / *wanted;
-}
-
-std::string read_file(const fs::path& path) {
-  std::ifstream in(path);
-  if (!in) throw UserError(path.string() + ": cannot be read (is this a brume run folder?)");
-  std::ostringstream text;
-  text << in.rdbuf();
-  return text.str();
 }
 
 // The time scales of the run that a window should span: the stirring's correlation time and the
@@ -85,9 +76,7 @@ RunScales run_scales(const fs::path& folder, const std::string& time_unit) {
 }
 
 std::string number(double v) {
-  char text[32];
-  std::snprintf(text, sizeof text, "%.4g", v);
-  return text;
+  return config::format_digits(v, 4);
 }
 
 void print_report(const fs::path& table_file, const physics::SteadinessReport& r,
@@ -158,13 +147,16 @@ int steadiness_command(const CommandLine& line) {
   const fs::path folder = line.positional.front();
   if (!fs::is_directory(folder)) throw UserError(folder.string() + ": no such run folder");
   const fs::path table_file = folder / "timeline.txt";
-  const std::string text = read_file(table_file);
-  io::TimelineText table;
+  std::optional<io::TimelineText> read;
   try {
-    table = io::read_timeline_text(text, std::numeric_limits<long>::max());
+    read = io::read_timeline_file(table_file, std::numeric_limits<long>::max());
   } catch (const std::runtime_error& e) {
-    throw UserError(table_file.string() + ": " + e.what());
+    throw UserError(e.what());
   }
+  if (!read) {
+    throw UserError(table_file.string() + ": cannot be read (is this a brume run folder?)");
+  }
+  const io::TimelineText& table = *read;
   std::optional<double> since;
   const auto time = std::find(table.names.begin(), table.names.end(), "time");
   if (time == table.names.end()) {

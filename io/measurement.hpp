@@ -50,4 +50,11 @@ inline MeasuredArray& add_array(Measurement& m, std::string name, std::string un
   return m.arrays.back();
 }
 
+// Appends a number.
+inline void add_number(Measurement& m, std::string name, double value, std::string unit,
+                       double to_cgs, std::string description) {
+  m.numbers.push_back(
+      MeasuredNumber{std::move(name), value, std::move(unit), to_cgs, std::move(description)});
+}
+
 }  // namespace brume::io

@@ -106,21 +106,25 @@ std::filesystem::path TimelineTable::text_file() const {
   return folder_ / "timeline.txt";
 }
 
-void TimelineTable::resume(long step) {
-  std::ifstream in(text_file());
-  if (!in) return;  // the earlier run wrote no row
+std::optional<TimelineText> read_timeline_file(const std::filesystem::path& file, long step) {
+  std::ifstream in(file);
+  if (!in) return std::nullopt;
   std::stringstream text;
   text << in.rdbuf();
-  TimelineText t;
   try {
-    t = read_timeline_text(text.str(), step);
+    return read_timeline_text(text.str(), step);
   } catch (const std::runtime_error& error) {
-    throw std::runtime_error(text_file().string() + ": " + error.what());
+    throw std::runtime_error(file.string() + ": " + error.what());
   }
+}
+
+void TimelineTable::resume(long step) {
+  std::optional<TimelineText> t = read_timeline_file(text_file(), step);
+  if (!t) return;  // the earlier run wrote no row
   columns_.clear();
-  for (std::size_t n = 0; n < t.names.size(); ++n)
-    columns_.push_back(MeasuredNumber{t.names[n], 0.0, t.units[n], 1.0, ""});
-  rows_ = std::move(t.rows);
+  for (std::size_t n = 0; n < t->names.size(); ++n)
+    columns_.push_back(MeasuredNumber{t->names[n], 0.0, t->units[n], 1.0, ""});
+  rows_ = std::move(t->rows);
   rewrite_ = true;
 }
 

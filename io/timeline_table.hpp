@@ -5,6 +5,7 @@
 #pragma once
 
 #include <filesystem>
+#include <optional>
 #include <string>
 #include <vector>
 
@@ -46,5 +47,10 @@ struct TimelineText {
   bool dropped_rows = false;
 };
 [[nodiscard]] TimelineText read_timeline_text(const std::string& text, long step);
+
+// The same for a file: nothing when it cannot be opened; std::runtime_error naming the file and
+// the line for a malformed table.
+[[nodiscard]] std::optional<TimelineText> read_timeline_file(const std::filesystem::path& file,
+                                                             long step);
 
 }  // namespace brume::io

@@ -1,8 +1,8 @@
 #include "physics/cooling_summary.hpp"
 
 #include <cmath>
-#include <cstdio>
 
+#include "io/config/number_text.hpp"
 #include "physics/cooling_equilibrium.hpp"
 #include "solver/units/constants.hpp"
 
@@ -11,9 +11,7 @@ namespace brume::physics {
 namespace {
 
 std::string number(double value, const char* unit) {
-  char text[64];
-  std::snprintf(text, sizeof text, "%.4g %s", value, unit);
-  return text;
+  return config::format_digits(value, 4) + " " + unit;
 }
 
 }  // namespace

@@ -4,11 +4,11 @@
 
 #include <algorithm>
 #include <cmath>
-#include <cstdio>
 #include <limits>
 #include <numbers>
 #include <string>
 
+#include "io/config/number_text.hpp"
 #include "physics/distributions_histogram.hpp"
 #include "physics/jeans_star_formation.hpp"
 #include "solver/exact_sum.hpp"
@@ -106,15 +106,8 @@ void tally_cells(const CellQuantities& q, const LogBins& contrast_bins, const Pa
   t.smallest_jeans_squared = smallest;
 }
 
-void add_number(io::Measurement& m, const char* name, double value, const char* unit, double to_cgs,
-                const char* description) {
-  m.numbers.push_back({name, value, unit, to_cgs, description});
-}
-
 std::string percent(double fraction) {
-  char text[48];
-  std::snprintf(text, sizeof text, "%.3g %%", 100.0 * fraction);
-  return text;
+  return config::format_digits(100.0 * fraction, 3) + " %";
 }
 
 }  // namespace

@@ -1,8 +1,8 @@
 #include "physics/phase_boundaries.hpp"
 
-#include <cstdio>
 
 #include "io/config/error.hpp"
+#include "io/config/number_text.hpp"
 #include "physics/cooling_equilibrium.hpp"
 #include "physics/cooling_settings.hpp"
 #include "solver/units/dimension.hpp"
@@ -22,9 +22,7 @@ std::optional<config::Issue> ordered(const config::SectionValues& values) {
 }
 
 std::string kelvin(double t) {
-  char text[32];
-  std::snprintf(text, sizeof text, "%.4g K", t);
-  return text;
+  return config::format_digits(t, 4) + " K";
 }
 
 }  // namespace

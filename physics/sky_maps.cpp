@@ -76,7 +76,7 @@ void add_curve(io::Measurement& out, const std::string& name, const std::string&
 
 void add_number(io::Measurement& out, const std::string& name, double value,
                 const std::string& description) {
-  out.numbers.push_back(io::MeasuredNumber{name, value, "1", 1.0, description});
+  io::add_number(out, name, value, "1", 1.0, description);
 }
 
 }  // namespace

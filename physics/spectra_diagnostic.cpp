@@ -86,11 +86,6 @@ std::span<const double> weighted_velocity(const CellQuantities& q, int d,
   return scratch;
 }
 
-void add_number(io::Measurement& m, std::string name, double value, std::string unit, double to_cgs,
-                std::string description) {
-  m.numbers.push_back({std::move(name), value, std::move(unit), to_cgs, std::move(description)});
-}
-
 }  // namespace
 
 SpectraDiagnostic::SpectraDiagnostic(SpectraFields fields) : fields_(fields) {}

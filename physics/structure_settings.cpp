@@ -1,8 +1,8 @@
 #include "physics/structure_settings.hpp"
 
-#include <cstdio>
 #include <string>
 
+#include "io/config/number_text.hpp"
 #include "physics/phase_boundaries.hpp"
 #include "solver/units/dimension.hpp"
 
@@ -18,12 +18,6 @@ std::optional<config::Issue> fit_range_ordered(const config::SectionValues& valu
             std::to_string(values.integer("fit_lowest_lag")) + "); a slope needs a range of lags"};
   }
   return std::nullopt;
-}
-
-std::string number_text(double x) {
-  char text[32];
-  std::snprintf(text, sizeof text, "%.6g", x);
-  return text;
 }
 
 }  // namespace
@@ -84,7 +78,8 @@ StructureSettings structure_settings(const config::ResolvedConfig& config) {
   // The cold phase of every statistic is the one of the section `phases`.
   const PhaseBoundaries phases = phase_boundaries(config);
   s.cold_temperature = phases.cold_below;
-  s.cold_origin = "phases.cold_below (" + number_text(phases.cold_below) + " K): " + phases.origin;
+  s.cold_origin =
+      "phases.cold_below (" + config::format_digits(phases.cold_below, 6) + " K): " + phases.origin;
   return s;
 }
 

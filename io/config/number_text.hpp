@@ -10,6 +10,9 @@ namespace brume::config {
 // Shortest text that reads back to exactly the same double ("0.3", "1e-08", "1.6666666666666667").
 [[nodiscard]] std::string format_number(double value);
 
+// `value` to `digits` significant digits, printf's %g ("5039", "1.84e+04"), for messages.
+[[nodiscard]] std::string format_digits(double value, int digits);
+
 // The whole text as a decimal number (optional sign, digits, fraction, exponent); nullopt when
 // anything else is present. Infinite and NaN spellings are not numbers here; see non_finite().
 [[nodiscard]] std::optional<double> parse_number(std::string_view text);

@@ -6,22 +6,18 @@
 #include <fstream>
 #include <sstream>
 
+#include "tests/support/scratch_files.hpp"
+
 namespace fs = std::filesystem;
 
 namespace {
 
 std::string read(const fs::path& path) {
-  std::ifstream in(path);
-  std::stringstream text;
-  text << in.rdbuf();
-  return text.str();
+  return brume::testing::text_of(path);
 }
 
 fs::path scratch(const char* name) {
-  const fs::path folder = fs::temp_directory_path() / ("brume-atomic-" + std::string(name));
-  fs::remove_all(folder);
-  fs::create_directories(folder);
-  return folder;
+  return brume::testing::scratch_folder("atomic", name);
 }
 
 }  // namespace

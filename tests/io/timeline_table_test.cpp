@@ -12,6 +12,7 @@
 #include <stdexcept>
 
 #include "io/statistics_file.hpp"
+#include "tests/support/scratch_files.hpp"
 
 namespace fs = std::filesystem;
 using brume::io::MeasuredNumber;
@@ -21,17 +22,11 @@ using brume::io::TimelineTable;
 namespace {
 
 std::string read(const fs::path& path) {
-  std::ifstream in(path);
-  std::stringstream text;
-  text << in.rdbuf();
-  return text.str();
+  return brume::testing::text_of(path);
 }
 
 fs::path scratch(const char* name) {
-  const fs::path folder = fs::temp_directory_path() / ("brume-timeline-" + std::string(name));
-  fs::remove_all(folder);
-  fs::create_directories(folder);
-  return folder;
+  return brume::testing::scratch_folder("timeline", name);
 }
 
 std::vector<MeasuredNumber> row(double step, double value) {
